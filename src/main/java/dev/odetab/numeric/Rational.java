@@ -1,0 +1,225 @@
+package dev.odetab.numeric;
+
+import java.math.BigDecimal;
+import java.math.BigInteger;
+import java.math.MathContext;
+
+/**
+ * Exact rational number p/q with q &gt; 0 and gcd(p, q) = 1.
+ *
+ * <p>Trust level: Exact. Every operation returns the exact result; nothing is ever rounded
+ * except by {@link #toBigDecimal(MathContext)}, whose rounding is the one of
+ * {@link BigDecimal#divide(BigDecimal, MathContext)} (correct rounding in the given mode).
+ */
+public final class Rational implements Comparable<Rational> {
+    public static final Rational ZERO = new Rational(BigInteger.ZERO, BigInteger.ONE);
+    public static final Rational ONE = new Rational(BigInteger.ONE, BigInteger.ONE);
+    public static final Rational TWO = new Rational(BigInteger.TWO, BigInteger.ONE);
+
+    private final BigInteger num;
+    private final BigInteger den;
+
+    private Rational(BigInteger num, BigInteger den) {
+        this.num = num;
+        this.den = den;
+    }
+
+    public static Rational of(long value) {
+        return new Rational(BigInteger.valueOf(value), BigInteger.ONE);
+    }
+
+    public static Rational of(BigInteger value) {
+        return new Rational(value, BigInteger.ONE);
+    }
+
+    public static Rational of(long num, long den) {
+        return of(BigInteger.valueOf(num), BigInteger.valueOf(den));
+    }
+
+    /** p/q reduced to lowest terms; q must not be zero. */
+    public static Rational of(BigInteger num, BigInteger den) {
+        if (den.signum() == 0) {
+            throw new ArithmeticException("division by zero");
+        }
+        if (den.signum() < 0) {
+            num = num.negate();
+            den = den.negate();
+        }
+        BigInteger g = num.gcd(den);
+        if (!g.equals(BigInteger.ONE) && g.signum() != 0) {
+            num = num.divide(g);
+            den = den.divide(g);
+        }
+        if (num.signum() == 0) {
+            den = BigInteger.ONE;
+        }
+        return new Rational(num, den);
+    }
+
+    /** The exact value of a BigDecimal (every finite decimal is a rational). */
+    public static Rational of(BigDecimal value) {
+        if (value.scale() <= 0) {
+            return of(value.toBigIntegerExact());
+        }
+        return of(value.unscaledValue(), BigInteger.TEN.pow(value.scale()));
+    }
+
+    /**
+     * Parses an exact decimal ({@code -7.25}, {@code 1e-3}, {@code .5}) or a rational
+     * ({@code 1/3}, {@code -2/7}). Never goes through a binary double.
+     *
+     * @throws NumberFormatException with a message naming what is wrong
+     */
+    public static Rational parse(String text) {
+        String s = text.strip();
+        int slash = s.indexOf('/');
+        if (slash >= 0) {
+            Rational p = parseDecimal(s.substring(0, slash), text);
+            Rational q = parseDecimal(s.substring(slash + 1), text);
+            if (q.signum() == 0) {
+                throw new NumberFormatException("'" + text + "' divides by zero");
+            }
+            return p.divide(q);
+        }
+        return parseDecimal(s, text);
+    }
+
+    private static Rational parseDecimal(String s, String whole) {
+        if (s.isEmpty() || !s.matches("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?")) {
+            throw new NumberFormatException("'" + whole + "' is not an exact decimal or rational (like -7.25, 1e-3 or 1/3)");
+        }
+        BigDecimal d = new BigDecimal(s);
+        return of(d);
+    }
+
+    public BigInteger numerator() {
+        return num;
+    }
+
+    public BigInteger denominator() {
+        return den;
+    }
+
+    public int signum() {
+        return num.signum();
+    }
+
+    public boolean isZero() {
+        return num.signum() == 0;
+    }
+
+    public boolean isInteger() {
+        return den.equals(BigInteger.ONE);
+    }
+
+    public Rational add(Rational o) {
+        if (den.equals(o.den)) {
+            return of(num.add(o.num), den);
+        }
+        return of(num.multiply(o.den).add(o.num.multiply(den)), den.multiply(o.den));
+    }
+
+    public Rational subtract(Rational o) {
+        return add(o.negate());
+    }
+
+    public Rational multiply(Rational o) {
+        return of(num.multiply(o.num), den.multiply(o.den));
+    }
+
+    public Rational multiply(long k) {
+        return of(num.multiply(BigInteger.valueOf(k)), den);
+    }
+
+    public Rational divide(Rational o) {
+        if (o.num.signum() == 0) {
+            throw new ArithmeticException("division by zero");
+        }
+        return of(num.multiply(o.den), den.multiply(o.num));
+    }
+
+    public Rational negate() {
+        return new Rational(num.negate(), den);
+    }
+
+    public Rational abs() {
+        return num.signum() < 0 ? negate() : this;
+    }
+
+    public Rational reciprocal() {
+        return ONE.divide(this);
+    }
+
+    /** this^k for any integer k (k &lt; 0 needs a non-zero base). */
+    public Rational pow(int k) {
+        if (k < 0) {
+            return reciprocal().pow(-k);
+        }
+        return new Rational(num.pow(k), den.pow(k));
+    }
+
+    /** Correctly rounded to {@code mc} (precision and rounding mode of the context). */
+    public BigDecimal toBigDecimal(MathContext mc) {
+        if (isInteger()) {
+            return new BigDecimal(num).round(mc);
+        }
+        return new BigDecimal(num).divide(new BigDecimal(den), mc);
+    }
+
+    /** The exact decimal expansion when the denominator is 2^a 5^b, else null. */
+    public BigDecimal toBigDecimalExact() {
+        BigInteger d = den;
+        int twos = d.getLowestSetBit();
+        d = d.shiftRight(twos);
+        int fives = 0;
+        BigInteger five = BigInteger.valueOf(5);
+        while (d.mod(five).signum() == 0) {
+            d = d.divide(five);
+            fives++;
+        }
+        if (!d.equals(BigInteger.ONE)) {
+            return null;
+        }
+        int scale = Math.max(twos, fives);
+        BigInteger scaled = num.multiply(BigInteger.TEN.pow(scale)).divide(den);
+        return new BigDecimal(scaled, scale);
+    }
+
+    /** Largest integer not above this value. */
+    public BigInteger floor() {
+        BigInteger[] qr = num.divideAndRemainder(den);
+        return (qr[1].signum() < 0) ? qr[0].subtract(BigInteger.ONE) : qr[0];
+    }
+
+    /** A double near this value: for heuristics only (choosing a parameter), never for a bound. */
+    public double doubleEstimate() {
+        return toBigDecimal(MathContext.DECIMAL64).doubleValue();
+    }
+
+    @Override
+    public int compareTo(Rational o) {
+        return num.multiply(o.den).compareTo(o.num.multiply(den));
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof Rational r && num.equals(r.num) && den.equals(r.den);
+    }
+
+    @Override
+    public int hashCode() {
+        return num.hashCode() * 31 + den.hashCode();
+    }
+
+    /** {@code p} or {@code p/q}. */
+    @Override
+    public String toString() {
+        return isInteger() ? num.toString() : num + "/" + den;
+    }
+
+    /** The exact decimal when there is one ({@code -7.25}), else {@code p/q}. */
+    public String toDecimalOrFraction() {
+        BigDecimal d = toBigDecimalExact();
+        return d == null ? toString() : d.stripTrailingZeros().toPlainString().replaceFirst("^-0$", "0");
+    }
+}
