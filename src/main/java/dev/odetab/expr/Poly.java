@@ -3,6 +3,7 @@ package dev.odetab.expr;
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.Rational;
 import java.math.BigInteger;
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 
@@ -242,6 +243,46 @@ public final class Poly {
             k++;
         }
         return k;
+    }
+
+    /**
+     * Number of distinct real roots in the closed interval [a, b], a &lt;= b, by Sturm's theorem
+     * on the square-free part (exact: every sign is taken at a rational point). Zero for the
+     * zero polynomial's undefined case is not allowed: the polynomial must be non-zero.
+     */
+    public int countRealRoots(Rational a, Rational b) {
+        if (isZero()) {
+            throw new ArithmeticException("the zero polynomial vanishes everywhere");
+        }
+        if (degree() == 0) {
+            return 0;
+        }
+        Poly f = divideExact(gcd(derivative()));
+        List<Poly> chain = new ArrayList<>();
+        chain.add(f);
+        chain.add(f.derivative());
+        while (!chain.get(chain.size() - 1).isZero()) {
+            Poly r = chain.get(chain.size() - 2).divideAndRemainder(chain.get(chain.size() - 1))[1].negate();
+            chain.add(r);
+        }
+        chain.remove(chain.size() - 1);
+        int count = signChanges(chain, a) - signChanges(chain, b);
+        return count + (f.evaluate(a).isZero() ? 1 : 0);
+    }
+
+    private static int signChanges(List<Poly> chain, Rational x) {
+        int changes = 0;
+        int last = 0;
+        for (Poly p : chain) {
+            int s = p.evaluate(x).signum();
+            if (s != 0) {
+                if (last != 0 && s != last) {
+                    changes++;
+                }
+                last = s;
+            }
+        }
+        return changes;
     }
 
     @Override

@@ -1,6 +1,7 @@
 package dev.odetab.numeric;
 
 import java.math.BigDecimal;
+import java.math.BigInteger;
 import java.math.MathContext;
 
 /**
@@ -118,13 +119,40 @@ public record Ball(BigDecimal mid, BigDecimal rad) {
         return rounded(mid.multiply(o.mid), r, precBits);
     }
 
-    /** Product with an exact rational. */
+    /** Product with an exact rational: one exact integer product, then one rounded division. */
     public Ball multiply(Rational q, int precBits) {
-        if (q.isInteger()) {
-            BigDecimal k = new BigDecimal(q.numerator());
-            return rounded(mid.multiply(k), rad.multiply(k.abs()), precBits);
+        Ball p = multiplyExact(q.numerator());
+        return q.isInteger() ? p.round(precBits) : p.divide(q.denominator(), precBits);
+    }
+
+    /** Product with an integer, midpoint not rounded (exact), radius rounded up. */
+    public Ball multiplyExact(BigInteger k) {
+        BigDecimal kd = new BigDecimal(k);
+        return new Ball(mid.multiply(kd), rad.signum() == 0 ? BigDecimal.ZERO : Directed.mulUp(rad, kd.abs()));
+    }
+
+    /** Sum with the midpoint not rounded (exact), radius rounded up. */
+    public Ball addExact(Ball o) {
+        BigDecimal r = rad.add(o.rad);
+        return new Ball(mid.add(o.mid), r.signum() == 0 ? BigDecimal.ZERO : Directed.up(r));
+    }
+
+    /**
+     * Quotient by a non-zero integer. The midpoint is rounded half-even, so its error is at
+     * most half a unit in its last place, bounded here by one unit ({@link BigDecimal#ulp()});
+     * the radius scales by 1/|k| rounded up.
+     */
+    public Ball divide(BigInteger k, int precBits) {
+        if (k.signum() == 0) {
+            throw new ArithmeticException("division by zero");
         }
-        return multiply(of(q, precBits), precBits);
+        BigDecimal kd = new BigDecimal(k);
+        BigDecimal m = mid.divide(kd, Precision.midpoint(precBits));
+        boolean exactQuotient = m.multiply(kd).compareTo(mid) == 0;
+        BigDecimal roundErr = exactQuotient ? BigDecimal.ZERO : m.ulp();
+        BigDecimal r = rad.signum() == 0 ? BigDecimal.ZERO : Directed.divUp(rad, kd.abs());
+        BigDecimal total = r.add(roundErr);
+        return new Ball(m, total.signum() == 0 ? BigDecimal.ZERO : Directed.up(total));
     }
 
     /**

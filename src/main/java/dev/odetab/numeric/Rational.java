@@ -196,6 +196,14 @@ public final class Rational implements Comparable<Rational> {
         return toBigDecimal(MathContext.DECIMAL64).doubleValue();
     }
 
+    public Rational min(Rational o) {
+        return compareTo(o) <= 0 ? this : o;
+    }
+
+    public Rational max(Rational o) {
+        return compareTo(o) >= 0 ? this : o;
+    }
+
     @Override
     public int compareTo(Rational o) {
         return num.multiply(o.den).compareTo(o.num.multiply(den));
