@@ -1,7 +1,70 @@
 package dev.odetab.cli;
 
-public final class Main {
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.util.List;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/**
+ * The {@code odetab} command line. Exit codes (DESIGN.md): 0 success; 1 a check or an audit
+ * found a difference; 2 bad input; 3 a numerical limit was reached; 70 an internal error
+ * (a bug: please report it with the command that caused it).
+ */
+@Command(name = "odetab", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
+        description = "Correctly rounded tables of solutions of second-order linear equations, with proven error bounds.",
+        subcommands = {EvalCommand.class, InspectCommand.class, CommandLine.HelpCommand.class})
+public final class Main implements Runnable {
+    public static final int OK = 0;
+    public static final int DIFFERENCE = 1;
+    public static final int BAD_INPUT = 2;
+    public static final int NUMERICAL_LIMIT = 3;
+    public static final int INTERNAL_ERROR = 70;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
     public static void main(String[] args) {
-        System.out.println("odetab");
+        System.exit(run(args, new PrintWriter(System.out, true, StandardCharsets.UTF_8),
+                new PrintWriter(System.err, true, StandardCharsets.UTF_8)));
+    }
+
+    /** Runs one command line; returns the exit code. Used by tests too. */
+    public static int run(String[] args, PrintWriter out, PrintWriter err) {
+        CommandLine cl = new CommandLine(new Main());
+        cl.setOut(out);
+        cl.setErr(err);
+        cl.setUnmatchedOptionsAllowedAsOptionParameters(false);
+        cl.setParameterExceptionHandler((ex, a) -> {
+            err.println("odetab: " + ex.getMessage());
+            CommandLine sub = ex.getCommandLine();
+            err.println("Try 'odetab " + (sub.getParent() == null ? "" : sub.getCommandName() + " ") + "--help'.");
+            return BAD_INPUT;
+        });
+        cl.setExecutionExceptionHandler((ex, c, parsed) -> {
+            err.println("odetab: internal error: " + ex);
+            if (System.getenv("ODETAB_DEBUG") != null) {
+                ex.printStackTrace(err);
+            }
+            return INTERNAL_ERROR;
+        });
+        CommandContext.set(List.of(args));
+        int code = cl.execute(args);
+        out.flush();
+        err.flush();
+        return code;
+    }
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    /** The version from the jar's manifest or the build's properties. */
+    static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            return new String[] {"odetab " + ToolVersion.get()};
+        }
     }
 }

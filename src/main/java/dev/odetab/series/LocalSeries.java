@@ -7,7 +7,6 @@ import dev.odetab.numeric.Rational;
 import java.math.BigDecimal;
 import java.math.BigInteger;
 import java.math.MathContext;
-import java.math.RoundingMode;
 
 /**
  * Summation of the Taylor series of one solution at an ordinary point, with its rigorous tail.
@@ -109,6 +108,26 @@ public final class LocalSeries {
         }
     }
 
+    /**
+     * Balls containing the first {@code count} Taylor coefficients c_0 … c_(count−1) at the
+     * recurrence's center of the solution with c_0 in y0 and c_1 in y1 (METHODS §1).
+     */
+    public static Ball[] coefficients(Recurrence rec, Ball y0, Ball y1, int count, int precBits) {
+        Ball[] c = new Ball[count];
+        for (int m = 0; m < count; m++) {
+            if (m == 0 || m == 1) {
+                c[m] = m == 0 ? y0 : y1;
+                continue;
+            }
+            Ball acc = Ball.ZERO;
+            for (int j = 1; j <= rec.order() && j <= m; j++) {
+                acc = acc.addExact(c[m - j].multiplyExact(rec.numerator(j, m)));
+            }
+            c[m] = acc.divide(rec.denominator(m), precBits);
+        }
+        return c;
+    }
+
     /** Upper bounds of |u_i| for i = m−J .. m−1, from the ring. */
     private static BigDecimal[] lastBounds(Ball[] ring, int m, int order) {
         BigDecimal[] r = new BigDecimal[order];
@@ -159,9 +178,5 @@ public final class LocalSeries {
             s += b[j] * pw;
         }
         return s;
-    }
-
-    static BigDecimal roundDown(BigDecimal v) {
-        return v.round(new MathContext(10, RoundingMode.FLOOR));
     }
 }

@@ -1,0 +1,115 @@
+package dev.odetab.cli;
+
+import dev.odetab.expr.ExprException;
+import dev.odetab.numeric.DecimalDigits;
+import dev.odetab.numeric.Precision;
+import dev.odetab.numeric.Rational;
+import dev.odetab.ode.FunctionDef;
+import dev.odetab.series.FunctionEvaluator;
+import dev.odetab.series.PrecisionCapException;
+import dev.odetab.series.SingularCrossingException;
+import dev.odetab.spec.InputError;
+import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code odetab eval FUNCTION X...}: one line per point, the point as given, a tab, the value. */
+@Command(name = "eval", mixinStandardHelpOptions = true,
+        description = {"Print the value (or the derivative) of a function at exact points, correctly rounded.",
+            "X is an exact decimal (-7.25, 1e-3) or rational (1/3); it never goes through a binary double."})
+final class EvalCommand implements Callable<Integer> {
+    static final int DEFAULT_CAP_BITS = 8192;
+    static final int MAX_CAP_BITS = 1 << 20;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "FUNCTION", description = "a built-in family (airy-ai, ...) or SPEC#NAME")
+    String function;
+
+    @Parameters(index = "1..*", arity = "1..*", paramLabel = "X", description = "exact points")
+    List<String> points = new ArrayList<>();
+
+    @Mixin
+    FunctionOptions functionOptions;
+
+    @Option(names = "--digits", paramLabel = "N", defaultValue = "20",
+            description = "significant decimal digits, correctly rounded (default ${DEFAULT-VALUE})")
+    int digits;
+
+    @Option(names = "--derivative", description = "print y'(x) instead of y(x)")
+    boolean derivative;
+
+    @Option(names = "--precision-cap-bits", paramLabel = "BITS", defaultValue = "" + DEFAULT_CAP_BITS,
+            description = "give up (exit 3) rather than work above this precision (default ${DEFAULT-VALUE})")
+    int capBits;
+
+    @Option(names = "--verbose", description = "report the work done on stderr: precision, attempts, steps, terms")
+    boolean verbose;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        try {
+            checkOptions();
+            FunctionDef f = functionOptions.resolve(function);
+            List<Rational> xs = new ArrayList<>();
+            int from = 1;
+            for (String p : points) {
+                int index = CommandContext.indexOf(p, from);
+                from = index + 1;
+                xs.add(Points.parse(p, index));
+            }
+            for (int i = 0; i < xs.size(); i++) {
+                FunctionEvaluator.Rounded r = FunctionEvaluator.digits(f, xs.get(i), derivative, digits, capBits);
+                out.println(points.get(i) + "\t" + DecimalDigits.format(r.value(), digits));
+                if (verbose) {
+                    err.println("odetab: x = " + points.get(i) + ": " + r.precBits() + " bits, " + r.attempts() + " attempt(s), "
+                            + r.steps() + " step(s), " + r.terms() + " terms");
+                }
+            }
+            return Main.OK;
+        } catch (InputError e) {
+            err.println("odetab: " + e.getMessage());
+            return Main.BAD_INPUT;
+        } catch (ExprException e) {
+            err.println("odetab: " + function + ": a normalization constant cannot be evaluated: " + e.getMessage());
+            return Main.BAD_INPUT;
+        } catch (SingularCrossingException e) {
+            err.println("odetab: " + e.getMessage());
+            return Main.BAD_INPUT;
+        } catch (PrecisionCapException e) {
+            err.println("odetab: " + e.getMessage());
+            return Main.NUMERICAL_LIMIT;
+        } finally {
+            out.flush();
+        }
+    }
+
+    private void checkOptions() throws InputError {
+        if (capBits < 64 || capBits > MAX_CAP_BITS) {
+            throw new InputError(optionWhere("--precision-cap-bits"),
+                    "the precision cap must lie between 64 and " + MAX_CAP_BITS + " bits, got " + capBits);
+        }
+        if (digits < 1) {
+            throw new InputError(optionWhere("--digits"), "--digits must be at least 1, got " + digits);
+        }
+        int needed = Precision.bitsForDigits(digits) + 32;
+        if (needed > capBits) {
+            throw new InputError(optionWhere("--digits"), "--digits " + digits + " needs at least " + needed
+                    + " bits of working precision, above the precision cap of " + capBits + " bits (raise it with --precision-cap-bits)");
+        }
+    }
+
+    private static String optionWhere(String option) {
+        int i = CommandContext.indexOf(option, 1);
+        return i == 0 ? "command line" : InputError.argument(i, option, 1);
+    }
+}

@@ -1,0 +1,64 @@
+package dev.odetab.series;
+
+import dev.odetab.expr.ExprException;
+import dev.odetab.numeric.Ball;
+import dev.odetab.numeric.DecimalDigits;
+import dev.odetab.numeric.Precision;
+import dev.odetab.numeric.Rational;
+import dev.odetab.ode.FunctionDef;
+import java.math.BigDecimal;
+
+/**
+ * Values of a {@link FunctionDef} at exact points, as enclosures or correctly rounded decimals.
+ *
+ * <p>Trust level: Rigorous. The normalization constants are evaluated to balls
+ * ({@link dev.odetab.expr.ConstExpr#evaluate}), then continued from the normalization point to
+ * x along the real line ({@link Continuation}); every returned ball contains the exact value.
+ * {@link #digits} adds Ziv's precision loop ({@link PrecisionLoop}): a decimal is returned only
+ * when every point of the enclosure rounds to it.
+ */
+public final class FunctionEvaluator {
+    /** Extra bits for the normalization constants, so that they do not dominate the radius. */
+    private static final int CONSTANT_GUARD_BITS = 16;
+
+    private FunctionEvaluator() {
+    }
+
+    /** An enclosure and the work that produced it. */
+    public record Enclosure(Jet jet, int precBits, int steps, int terms) {
+    }
+
+    /** A correctly rounded decimal and the work it took (the last, deciding, evaluation). */
+    public record Rounded(BigDecimal value, Ball enclosure, int precBits, int attempts, int steps, int terms) {
+    }
+
+    /**
+     * Balls containing y(x) and y'(x) at working precision {@code precBits}.
+     *
+     * @throws ExprException when a normalization constant cannot be evaluated
+     * @throws SingularCrossingException when a real singular point lies between the normalization point and x
+     */
+    public static Enclosure enclose(FunctionDef f, Rational x, int precBits) throws ExprException {
+        Jet start = new Jet(f.value().evaluate(precBits + CONSTANT_GUARD_BITS),
+                f.slope().evaluate(precBits + CONSTANT_GUARD_BITS));
+        Continuation.Result r = Continuation.evaluate(f.equation(), f.at(), start, x, precBits);
+        return new Enclosure(r.jet(), precBits, r.steps(), r.terms());
+    }
+
+    /**
+     * y(x), or y'(x) when {@code derivative}, correctly rounded to {@code digits10} significant
+     * digits (round half to even).
+     *
+     * @throws PrecisionCapException when {@code capBits} is not enough to decide the rounding
+     */
+    public static Rounded digits(FunctionDef f, Rational x, boolean derivative, int digits10, int capBits)
+            throws ExprException, PrecisionCapException {
+        int needed = Precision.bitsForDigits(digits10);
+        Enclosure[] last = new Enclosure[1];
+        PrecisionLoop.Outcome<BigDecimal> out = PrecisionLoop.<BigDecimal, ExprException>run(prec -> {
+            last[0] = enclose(f, x, prec);
+            return derivative ? last[0].jet().derivative() : last[0].jet().value();
+        }, b -> DecimalDigits.round(b, digits10), needed, needed + 32, capBits);
+        return new Rounded(out.result(), out.enclosure(), out.precBits(), out.attempts(), last[0].steps(), last[0].terms());
+    }
+}

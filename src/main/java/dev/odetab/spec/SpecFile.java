@@ -1,0 +1,255 @@
+package dev.odetab.spec;
+
+import dev.odetab.expr.ConstExpr;
+import dev.odetab.expr.EquationParser;
+import dev.odetab.expr.ExprException;
+import dev.odetab.expr.ExprParser;
+import dev.odetab.numeric.Rational;
+import dev.odetab.ode.Equation;
+import dev.odetab.ode.FunctionDef;
+import dev.odetab.ode.family.Catalog;
+import dev.odetab.ode.family.Family;
+import dev.odetab.ode.family.ParameterException;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeSet;
+import org.tomlj.Toml;
+import org.tomlj.TomlParseError;
+import org.tomlj.TomlParseResult;
+import org.tomlj.TomlPosition;
+import org.tomlj.TomlTable;
+
+/**
+ * A spec file (TOML, DESIGN.md "Spec file"): reading, validation with positions, and the
+ * functions it defines. Every problem is an {@link InputError} located as
+ * {@code file:line:column}; for a problem inside a string value the column points at the
+ * character inside the string (exact for strings without escape sequences).
+ */
+public final class SpecFile {
+    static final Set<String> TOP_LEVEL_KEYS = Set.of("title", "functions", "tables");
+    static final Set<String> EQUATION_KEYS = Set.of("equation", "at", "value", "slope");
+
+    private final String display;
+    private final List<String> lines;
+    private final TomlParseResult toml;
+
+    private SpecFile(String display, List<String> lines, TomlParseResult toml) {
+        this.display = display;
+        this.lines = lines;
+        this.toml = toml;
+    }
+
+    /**
+     * Reads and parses a spec (TOML syntax and the top-level keys; functions are checked when
+     * asked for).
+     */
+    public static SpecFile load(Path path) throws InputError {
+        String display = path.toString();
+        String text;
+        try {
+            text = Files.readString(path, StandardCharsets.UTF_8);
+        } catch (NoSuchFileException e) {
+            throw new InputError(display, "no such spec file");
+        } catch (IOException e) {
+            throw new InputError(display, "cannot read the spec file: " + e.getMessage());
+        }
+        TomlParseResult toml = Toml.parse(text);
+        if (toml.hasErrors()) {
+            TomlParseError first = toml.errors().get(0);
+            TomlPosition p = first.position();
+            String message = first.getMessage().replaceFirst("\\s*\\(line \\d+, column \\d+\\)$", "");
+            throw new InputError(display + ":" + p.line() + ":" + p.column(), "TOML syntax: " + message);
+        }
+        SpecFile spec = new SpecFile(display, text.lines().toList(), toml);
+        for (String key : toml.keySet()) {
+            if (!TOP_LEVEL_KEYS.contains(key)) {
+                throw spec.error(List.of(key), "unknown key '" + key + "'" + Suggestions.hint(key, TOP_LEVEL_KEYS)
+                        + " (allowed at the top: " + String.join(", ", new TreeSet<>(TOP_LEVEL_KEYS)) + ")");
+            }
+        }
+        if (toml.contains("functions") && !toml.isTable("functions")) {
+            throw spec.error(List.of("functions"), "'functions' must be a table of functions ([functions.NAME])");
+        }
+        return spec;
+    }
+
+    public String display() {
+        return display;
+    }
+
+    /** Names of the functions defined in {@code [functions.*]}, in file order. */
+    public Set<String> functionNames() {
+        TomlTable t = toml.getTable("functions");
+        return t == null ? Set.of() : new LinkedHashSet<>(t.keySet());
+    }
+
+    /** The function {@code name}, validated. */
+    public FunctionDef function(String name) throws InputError {
+        TomlTable functions = toml.getTable("functions");
+        if (functions == null || !functions.contains(List.of(name))) {
+            throw new InputError(display, "no function '" + name + "' in [functions]"
+                    + Suggestions.hint(name, functionNames())
+                    + (functionNames().isEmpty() ? " (the spec defines none)" : " (defined: " + String.join(", ", functionNames()) + ")"));
+        }
+        List<String> base = List.of("functions", name);
+        if (!functions.isTable(List.of(name))) {
+            throw error(base, "functions." + name + " must be a table with 'equation', 'at', 'value', 'slope' or with 'family'");
+        }
+        TomlTable f = functions.getTable(List.of(name));
+        String qualified = display + "#" + name;
+        if (f.contains("family")) {
+            return familyFunction(qualified, base, f);
+        }
+        return equationFunction(qualified, base, f);
+    }
+
+    private FunctionDef equationFunction(String qualified, List<String> base, TomlTable f) throws InputError {
+        for (String key : f.keySet()) {
+            if (!EQUATION_KEYS.contains(key)) {
+                throw error(child(base, key), "unknown key '" + key + "'" + Suggestions.hint(key, union(EQUATION_KEYS, Set.of("family")))
+                        + " (a function has 'equation', 'at', 'value', 'slope', or 'family' and its parameters)");
+            }
+        }
+        for (String required : List.of("equation", "value", "slope")) {
+            if (!f.contains(required)) {
+                throw error(base, "function '" + base.get(1) + "' needs '" + required + "' (or 'family')");
+            }
+        }
+        String eqText = string(base, f, "equation");
+        Equation eq;
+        try {
+            eq = EquationParser.parse(eqText, Map.of());
+        } catch (ExprException e) {
+            throw errorInString(child(base, "equation"), e.column(), e.getMessage());
+        }
+        Rational at = Rational.ZERO;
+        if (f.contains("at")) {
+            String atText = string(base, f, "at");
+            ConstExpr atExpr = constant(child(base, "at"), atText);
+            at = atExpr.exact().orElseThrow(() -> errorUnchecked(child(base, "at"),
+                    "the normalization point must be an exact rational, got '" + atText + "'"));
+            if (!eq.isOrdinary(at)) {
+                throw error(child(base, "at"), "x = " + at.toDecimalOrFraction()
+                        + " is a singular point of the equation (its coefficient of y'' vanishes there); choose an ordinary point");
+            }
+        }
+        ConstExpr value = constant(child(base, "value"), string(base, f, "value"));
+        ConstExpr slope = constant(child(base, "slope"), string(base, f, "slope"));
+        return new FunctionDef(qualified, eq, at, value, slope, Map.of(), "defined in " + display);
+    }
+
+    private FunctionDef familyFunction(String qualified, List<String> base, TomlTable f) throws InputError {
+        String familyName = string(base, f, "family");
+        Family family = Catalog.lookup(familyName).orElseThrow(() -> errorUnchecked(child(base, "family"),
+                "unknown family '" + familyName + "'" + Suggestions.hint(familyName, Catalog.names())
+                        + " (known: " + String.join(", ", Catalog.names()) + ")"));
+        Set<String> allowed = new LinkedHashSet<>();
+        family.parameters().forEach(p -> allowed.add(p.name()));
+        Map<String, Rational> values = new HashMap<>();
+        for (String key : f.keySet()) {
+            if (key.equals("family")) {
+                continue;
+            }
+            if (!allowed.contains(key)) {
+                throw error(child(base, key), "unknown key '" + key + "' for family " + familyName
+                        + Suggestions.hint(key, allowed)
+                        + (allowed.isEmpty() ? " (it takes no parameters)" : " (its parameters: " + String.join(", ", allowed) + ")"));
+            }
+            values.put(key, parameter(child(base, key), f.get(key)));
+        }
+        try {
+            FunctionDef d = family.define(values);
+            return new FunctionDef(qualified, d.equation(), d.at(), d.value(), d.slope(), d.parameters(), d.source());
+        } catch (ParameterException e) {
+            List<String> where = e.parameter() != null && f.contains(e.parameter()) ? child(base, e.parameter()) : child(base, "family");
+            throw error(where, e.getMessage());
+        }
+    }
+
+    private Rational parameter(List<String> key, Object raw) throws InputError {
+        if (raw instanceof Long l) {
+            return Rational.of(l);
+        }
+        if (raw instanceof String s) {
+            ConstExpr e = constant(key, s);
+            return e.exact().orElseThrow(() -> errorUnchecked(key,
+                    "a parameter must be an exact rational, and '" + s + "' is not known to be one"));
+        }
+        if (raw instanceof Double) {
+            throw error(key, "write the parameter as a string (\"0.5\", \"1/3\") so that it stays exact; TOML floats are binary");
+        }
+        throw error(key, "a parameter must be an integer or a string holding an exact rational");
+    }
+
+    private ConstExpr constant(List<String> key, String text) throws InputError {
+        try {
+            ConstExpr e = ExprParser.parseConstant(text, Map.of());
+            e.evaluate(64);
+            return e;
+        } catch (ExprException e) {
+            throw errorInString(key, e.column(), e.getMessage());
+        }
+    }
+
+    private String string(List<String> base, TomlTable f, String key) throws InputError {
+        Object v = f.get(List.of(key));
+        if (!(v instanceof String s)) {
+            throw error(child(base, key), "'" + key + "' must be a string");
+        }
+        return s;
+    }
+
+    private static List<String> child(List<String> base, String key) {
+        List<String> r = new ArrayList<>(base);
+        r.add(key);
+        return r;
+    }
+
+    private static Set<String> union(Set<String> a, Set<String> b) {
+        Set<String> r = new LinkedHashSet<>(a);
+        r.addAll(b);
+        return r;
+    }
+
+    /** An error located at a key (the key's own position). */
+    InputError error(List<String> key, String message) {
+        TomlPosition p = toml.inputPositionOf(key);
+        String where = p == null ? display : display + ":" + p.line() + ":" + p.column();
+        return new InputError(where, message);
+    }
+
+    private InputError errorUnchecked(List<String> key, String message) {
+        return error(key, message);
+    }
+
+    /** An error at a 1-based column inside the string value of a key. */
+    InputError errorInString(List<String> key, int columnInString, String message) {
+        TomlPosition p = toml.inputPositionOf(key);
+        if (p == null) {
+            return new InputError(display, message);
+        }
+        int line = p.line();
+        String text = line - 1 < lines.size() ? lines.get(line - 1) : "";
+        int eq = text.indexOf('=', Math.max(0, p.column() - 1));
+        int col = p.column();
+        if (eq >= 0) {
+            int i = eq + 1;
+            while (i < text.length() && (text.charAt(i) == ' ' || text.charAt(i) == '\t')) {
+                i++;
+            }
+            if (i < text.length() && (text.charAt(i) == '"' || text.charAt(i) == '\'')) {
+                col = i + 1 + columnInString;
+            }
+        }
+        return new InputError(display + ":" + line + ":" + col, message);
+    }
+}
