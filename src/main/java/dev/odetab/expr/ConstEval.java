@@ -174,8 +174,7 @@ final class ConstEval {
                     case DIVIDE:
                         Ball r = ball(b.right(), inner);
                         if (r.containsZero()) {
-                            throw new ExprException(b.column(), "division by a value that cannot be separated from zero at "
-                                    + precBits + " bits");
+                            throw new ExprException(b.column(), "division by a value that cannot be separated from zero at this precision");
                         }
                         return l.divide(r, precBits);
                     default:
@@ -185,8 +184,7 @@ final class ConstEval {
                         }
                         if (k.isInteger() && k.numerator().bitLength() < 31) {
                             if (k.signum() < 0 && l.containsZero()) {
-                                throw new ExprException(b.column(), "negative power of a value that cannot be separated from zero at "
-                                        + precBits + " bits");
+                                throw new ExprException(b.column(), "negative power of a value that cannot be separated from zero at this precision");
                             }
                             return l.pow(k.numerator().intValueExact(), precBits);
                         }

@@ -53,7 +53,7 @@ public final class ExprParser {
      * A rational function of x with exact rational coefficients, e.g. {@code (1-x^2)/(x+4)} or
      * {@code (1/4)*x^2 + 4^(1/2)*x}. Constant parts must be exactly rational (see
      * {@link ConstExpr#exact()}); powers of a non-constant base must have an exponent that is
-     * an exact integer in [0, 10000].
+     * an exact integer in [0, 256].
      *
      * @throws ExprException with the column of the fault, for example "coefficients must be
      *     exact rationals; 'sqrt' is not allowed here" at the column of {@code sqrt}

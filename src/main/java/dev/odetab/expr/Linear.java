@@ -19,7 +19,7 @@ import java.util.Map;
  */
 final class Linear {
     /** Largest exponent accepted on a non-constant base. */
-    static final int MAX_POWER = 10_000;
+    static final int MAX_POWER = 256;
 
     /** d2·y'' + d1·y' + d0·y + free. */
     record Form(RationalFunction d2, RationalFunction d1, RationalFunction d0, RationalFunction free) {

@@ -14,7 +14,7 @@ import java.util.TreeSet;
  *
  * <pre>
  * equation := sum '=' sum
- * sum      := factor-term (('+' | '-') term)*      (a leading sign is read by factor)
+ * sum      := term (('+' | '-') term)*             (a leading sign is read by factor)
  * term     := factor (('*' | '/') factor | juxtaposed factor)*
  * factor   := ('-' | '+') factor | power
  * power    := primary ('^' factor)?                (so -2^2 = -4 and 2^3^2 = 2^9)
