@@ -46,7 +46,7 @@ import java.util.List;
  */
 final class RootIsolation {
     static final int START_PREC_BITS = 128;
-    static final int MAX_PREC_BITS = 8192;
+    static final int MAX_PREC_BITS = 2048;
     private static final BigDecimal STALL = new BigDecimal("0.9");
 
     private RootIsolation() {
@@ -64,6 +64,7 @@ final class RootIsolation {
      * {@code polys}, listed per polynomial in the same order.
      *
      * @param polys non-constant, square-free, pairwise coprime polynomials with rational coefficients
+     * @throws IllegalArgumentException when a precondition fails (checked exactly with gcds)
      * @throws ArithmeticException when the roots could not be separated at {@link #MAX_PREC_BITS}
      */
     static List<List<Root>> isolate(List<Poly> polys) {
@@ -71,6 +72,14 @@ final class RootIsolation {
         for (Poly p : polys) {
             if (p.isConstant()) {
                 throw new IllegalArgumentException("constant polynomial has no roots: " + p);
+            }
+            if (!p.gcd(p.derivative()).isConstant()) {
+                throw new IllegalArgumentException("not square-free: " + p);
+            }
+            for (Part other : parts) {
+                if (!other.rest.gcd(p).isConstant()) {
+                    throw new IllegalArgumentException("not coprime: " + other.rest + " and " + p);
+                }
             }
             parts.add(new Part(p.monic()));
         }
@@ -430,7 +439,8 @@ final class RootIsolation {
         }
         if (start != null) {
             z = start.toArray(z);
-            maxIter = 40 + 2 * n;
+            spreadCoincident(z, digits, mc);
+            maxIter = 100 + 10 * n;
         } else {
             double logRadius = Double.NEGATIVE_INFINITY;
             for (int k = 1; k <= n; k++) {
@@ -493,6 +503,28 @@ final class RootIsolation {
             previous = worst;
         }
         return new ArrayList<>(List.of(z));
+    }
+
+    /**
+     * Heuristic: approximations that agree to about half the working digits (typically the
+     * members of a root cluster, rounded alike at the previous precision) are moved apart on
+     * a small circle of that relative size, each in its own direction; the Aberth correction
+     * of coinciding points is identical, so without this they would never separate.
+     */
+    private static void spreadCoincident(Cx[] z, int digits, MathContext mc) {
+        BigDecimal near = BigDecimal.ONE.scaleByPowerOfTen(-(digits / 2 - 8));
+        int n = z.length;
+        for (int i = 0; i < n; i++) {
+            BigDecimal scale = near.multiply(z[i].normEstimate().max(BigDecimal.ONE));
+            for (int j = 0; j < n; j++) {
+                if (j != i && z[i].subtract(z[j]).normEstimate().compareTo(scale) <= 0) {
+                    double angle = 2 * Math.PI * i / n + 0.3;
+                    Cx shift = new Cx(scale.multiply(new BigDecimal(Math.cos(angle))), scale.multiply(new BigDecimal(Math.sin(angle))));
+                    z[i] = z[i].add(shift).round(mc);
+                    break;
+                }
+            }
+        }
     }
 
     /**

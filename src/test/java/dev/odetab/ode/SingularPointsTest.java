@@ -17,6 +17,7 @@ import org.apfloat.Apcomplex;
 import org.apfloat.ApcomplexMath;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 class SingularPointsTest {
@@ -351,5 +352,37 @@ class SingularPointsTest {
             assertEquals(pts.get(i).location().im().negate(), pts.get(i + 1).location().im());
             assertTrue(pts.get(i).location().im().signum() < 0);
         }
+    }
+
+    @Test
+    void isolationRejectsInputsThatBreakItsPreconditions() {
+        // a double root can never get an isolating Weierstrass disk: refused up front
+        assertThrows(IllegalArgumentException.class, () -> RootIsolation.isolate(List.of(poly(-2, 0, 1).pow(2))));
+        assertThrows(IllegalArgumentException.class, () -> RootIsolation.isolate(List.of(poly(-2, 0, 1), poly(-2, 0, 1).multiply(poly(1, 1)))));
+    }
+
+    @Test
+    void clusterBelowTheStartingPrecisionIsResolved() {
+        // (x^2 - 2)^2 - 10^-250: pairs sqrt(2 ± 10^-125), about 3.5e-126 apart: needs about 1024 bits
+        Poly q = poly(-2, 0, 1).pow(2).subtract(Poly.constant(Rational.of(java.math.BigInteger.ONE, java.math.BigInteger.TEN.pow(250))));
+        List<SingularPoint> pts = SingularPoints.of(eq(q, Poly.ZERO, poly(1)));
+        assertEquals(4, pts.size());
+        assertPairwiseDisjoint(pts);
+        // reference: sqrt(2 ± 10^-125) by apfloat 1.15.0 ApfloatMath.sqrt at 800 digits (the sum carries
+        // only the digits of its terms, hence the explicit precision)
+        Apfloat tiny = new Apfloat("1e-125", 800);
+        Apfloat two = new Apfloat(2, 800);
+        assertTrue(pts.get(2).location().contains(dec(ApfloatMath.sqrt(two.subtract(tiny).precision(800))), BigDecimal.ZERO));
+        assertTrue(pts.get(3).location().contains(dec(ApfloatMath.sqrt(two.add(tiny).precision(800))), BigDecimal.ZERO));
+        assertTrue(pts.get(0).location().contains(dec(ApfloatMath.sqrt(two.add(tiny).precision(800)).negate()), BigDecimal.ZERO));
+        assertTrue(pts.stream().allMatch(SingularPoint::real));
+    }
+
+    @Test
+    @Tag("slow")
+    void rootsCloserThanThePrecisionCapAreReportedNotGuessed() {
+        // (x^2 - 2)^2 - 10^-1400: two roots about 10^-700 apart near each of ±sqrt 2, finer than 2048 bits (617 digits)
+        Poly q = poly(-2, 0, 1).pow(2).subtract(Poly.constant(Rational.of(java.math.BigInteger.ONE, java.math.BigInteger.TEN.pow(1400))));
+        assertThrows(ArithmeticException.class, () -> SingularPoints.of(eq(q, Poly.ZERO, poly(1))));
     }
 }
