@@ -21,8 +21,10 @@ import java.util.List;
  * the input polynomials, and that root is a root of the polynomial the disk is listed under.
  * Roots that are Gaussian rationals a + bi are recognised and then known exactly.
  *
- * <p>Method. Approximations are heuristic (Aberth iteration in plain BigDecimal; "a double
- * may choose, never prove"). Proof, for each remaining monic factor q of degree n with
+ * <p>Method. Approximations are heuristic (Aberth iteration seeded in complex doubles and
+ * polished in plain BigDecimal; "a double may choose, never prove"). Gaussian-rational
+ * candidates guessed from them are kept only after exact evaluation gives zero, and are
+ * divided out exactly. Proof, for each remaining monic factor q of degree n with
  * distinct approximations z_1..z_n, comes from the Weierstrass corrections
  * W_i = q(z_i) / Π_{j≠i}(z_i − z_j): q is the characteristic polynomial of the matrix
  * A = diag(z_i) − (W_i)_{i,j} (matrix determinant lemma: det(z − A) = Π(z − z_j) +
