@@ -22,25 +22,27 @@ public record ComplexBall(Ball re, Ball im) {
     public static final ComplexBall ZERO = new ComplexBall(Ball.ZERO, Ball.ZERO);
     public static final ComplexBall ONE = new ComplexBall(Ball.ONE, Ball.ZERO);
 
-    /** The exact point re + i·im (both radii zero). */
+    /** Exact: the point re + i·im (both radii zero). */
     public static ComplexBall exact(BigDecimal re, BigDecimal im) {
         return new ComplexBall(Ball.exact(re), Ball.exact(im));
     }
 
-    /** The exact rational point re + i·im at {@code precBits}; see {@link Ball#of(Rational, int)}. */
+    /** Rigorous: contains the rational point re + i·im; midpoints at {@code precBits}, see {@link Ball#of(Rational, int)}. */
     public static ComplexBall of(Rational re, Rational im, int precBits) {
         return new ComplexBall(Ball.of(re, precBits), Ball.of(im, precBits));
     }
 
+    /** Rigorous: contains every sum of points of the two rectangles. */
     public ComplexBall add(ComplexBall o, int precBits) {
         return new ComplexBall(re.add(o.re, precBits), im.add(o.im, precBits));
     }
 
+    /** Rigorous: contains every difference of points of the two rectangles. */
     public ComplexBall subtract(ComplexBall o, int precBits) {
         return new ComplexBall(re.subtract(o.re, precBits), im.subtract(o.im, precBits));
     }
 
-    /** (a + bi)(c + di) = (ac − bd) + (ad + bc)i, each product a rigorous real ball. */
+    /** Rigorous: (a + bi)(c + di) = (ac − bd) + (ad + bc)i, each product a rigorous real ball. */
     public ComplexBall multiply(ComplexBall o, int precBits) {
         Ball r = re.multiply(o.re, precBits).subtract(im.multiply(o.im, precBits), precBits);
         Ball i = re.multiply(o.im, precBits).add(im.multiply(o.re, precBits), precBits);
@@ -48,7 +50,7 @@ public record ComplexBall(Ball re, Ball im) {
     }
 
     /**
-     * (a + bi)/(c + di) = (a + bi)(c − di)/(c² + d²).
+     * Rigorous: (a + bi)/(c + di) = (a + bi)(c − di)/(c² + d²), each part a rigorous real ball.
      *
      * @throws ArithmeticException when the ball c² + d² contains zero (the divisor may vanish)
      */
@@ -58,13 +60,13 @@ public record ComplexBall(Ball re, Ball im) {
         return new ComplexBall(num.re.divide(den, precBits), num.im.divide(den, precBits));
     }
 
-    /** True when the rectangle may contain zero (both parts contain zero). */
+    /** Rigorous: false only when the rectangle surely excludes zero (true when both parts contain zero). */
     public boolean containsZero() {
         return re.containsZero() && im.containsZero();
     }
 
     /**
-     * An upper bound of |z| over the rectangle: sqrt(A² + B²) rounded up, with A, B the
+     * Rigorous: an upper bound of |z| over the rectangle: sqrt(A² + B²) rounded up, with A, B the
      * upper bounds of |re| and |im| (|z|² = re² + im² &lt;= A² + B²).
      */
     public BigDecimal absUpper() {

@@ -21,8 +21,10 @@ import java.util.List;
  * the input polynomials, and that root is a root of the polynomial the disk is listed under.
  * Roots that are Gaussian rationals a + bi are recognised and then known exactly.
  *
- * <p>Method. Approximations are heuristic (Aberth iteration in plain BigDecimal; "a double
- * may choose, never prove"). Proof, for each remaining monic factor q of degree n with
+ * <p>Method. Approximations are heuristic (Aberth iteration seeded in complex doubles and
+ * polished in plain BigDecimal; "a double may choose, never prove"). Gaussian-rational
+ * candidates guessed from them are kept only after exact evaluation gives zero, and are
+ * divided out exactly. Proof, for each remaining monic factor q of degree n with
  * distinct approximations z_1..z_n, comes from the Weierstrass corrections
  * W_i = q(z_i) / Π_{j≠i}(z_i − z_j): q is the characteristic polynomial of the matrix
  * A = diag(z_i) − (W_i)_{i,j} (matrix determinant lemma: det(z − A) = Π(z − z_j) +
@@ -46,7 +48,8 @@ import java.util.List;
  */
 final class RootIsolation {
     static final int START_PREC_BITS = 128;
-    static final int MAX_PREC_BITS = 8192;
+    static final int MAX_PREC_BITS = 2048;
+    private static final BigDecimal STALL = new BigDecimal("0.9");
 
     private RootIsolation() {
     }
@@ -63,6 +66,7 @@ final class RootIsolation {
      * {@code polys}, listed per polynomial in the same order.
      *
      * @param polys non-constant, square-free, pairwise coprime polynomials with rational coefficients
+     * @throws IllegalArgumentException when a precondition fails (checked exactly with gcds)
      * @throws ArithmeticException when the roots could not be separated at {@link #MAX_PREC_BITS}
      */
     static List<List<Root>> isolate(List<Poly> polys) {
@@ -70,6 +74,14 @@ final class RootIsolation {
         for (Poly p : polys) {
             if (p.isConstant()) {
                 throw new IllegalArgumentException("constant polynomial has no roots: " + p);
+            }
+            if (!p.gcd(p.derivative()).isConstant()) {
+                throw new IllegalArgumentException("not square-free: " + p);
+            }
+            for (Part other : parts) {
+                if (!other.rest.gcd(p).isConstant()) {
+                    throw new IllegalArgumentException("not coprime: " + other.rest + " and " + p);
+                }
             }
             parts.add(new Part(p.monic()));
         }
@@ -167,13 +179,8 @@ final class RootIsolation {
         }
         MathContext mc = Precision.midpoint(precBits);
         List<ComplexBall> z = new ArrayList<>();
-        BigDecimal realCut = BigDecimal.ONE.scaleByPowerOfTen(-(mc.getPrecision() / 2));
-        for (Cx c : approx) {
-            BigDecimal im = c.im.round(mc);
-            if (im.abs().compareTo(realCut.multiply(c.normEstimate().max(BigDecimal.ONE))) <= 0) {
-                im = BigDecimal.ZERO;
-            }
-            z.add(ComplexBall.exact(c.re.round(mc), im));
+        for (Cx c : centers(approx, mc)) {
+            z.add(ComplexBall.exact(c.re, c.im));
         }
         List<ComplexBall> coef = new ArrayList<>();
         for (Rational r : q.coefficients()) {
@@ -202,6 +209,53 @@ final class RootIsolation {
             out.add(new ComplexEnclosure(zi.re().mid(), zi.im().mid(), r));
         }
         return out;
+    }
+
+    /**
+     * Heuristic choice of disk centers (any choice is sound; a good one keeps the disks small
+     * and the output deterministic): the approximations rounded by {@code mc}; an imaginary
+     * part below 10^(−digits/2) of the modulus is set to zero, and the remaining non-real
+     * ones are paired with their nearest conjugate and replaced by an exactly conjugate pair
+     * (the mean of the two), as the roots of a real polynomial are.
+     */
+    private static List<Cx> centers(List<Cx> approx, MathContext mc) {
+        BigDecimal realCut = BigDecimal.ONE.scaleByPowerOfTen(-(mc.getPrecision() / 2));
+        List<Cx> c = new ArrayList<>();
+        for (Cx a : approx) {
+            BigDecimal im = a.im.round(mc);
+            if (im.abs().compareTo(realCut.multiply(a.normEstimate().max(BigDecimal.ONE))) <= 0) {
+                im = BigDecimal.ZERO;
+            }
+            c.add(new Cx(a.re.round(mc), im));
+        }
+        boolean[] paired = new boolean[c.size()];
+        BigDecimal two = BigDecimal.valueOf(2);
+        for (int i = 0; i < c.size(); i++) {
+            if (paired[i] || c.get(i).im.signum() <= 0) {
+                continue;
+            }
+            int best = -1;
+            BigDecimal bestDist = null;
+            for (int j = 0; j < c.size(); j++) {
+                if (paired[j] || c.get(j).im.signum() >= 0) {
+                    continue;
+                }
+                BigDecimal d = c.get(i).subtract(new Cx(c.get(j).re, c.get(j).im.negate())).normEstimate();
+                if (bestDist == null || d.compareTo(bestDist) < 0) {
+                    best = j;
+                    bestDist = d;
+                }
+            }
+            if (best >= 0) {
+                BigDecimal re = c.get(i).re.add(c.get(best).re).divide(two).round(mc);
+                BigDecimal im = c.get(i).im.subtract(c.get(best).im).divide(two).round(mc);
+                c.set(i, new Cx(re, im));
+                c.set(best, new Cx(re, im.negate()));
+                paired[i] = true;
+                paired[best] = true;
+            }
+        }
+        return c;
     }
 
     /** Per-polynomial state: exactly recognised roots, the remaining factor and its approximations. */
@@ -276,12 +330,14 @@ final class RootIsolation {
     }
 
     /**
-     * Heuristic: the first continued-fraction convergent p/q of x with q &lt;= 10^(digits/4)
+     * Heuristic: the first continued-fraction convergent p/q of x with q &lt;= 10^(digits/5)
      * and |x − p/q| &lt;= 10^(−digits/2) max(1, |x|), or null. Only a candidate: callers verify.
+     * The gap between the two exponents makes a candidate for an irrational x unlikely
+     * (it needs a partial quotient near 10^(digits/10)), so exact checks stay rare.
      */
     static Rational guess(BigDecimal x, int digits) {
         BigDecimal tol = BigDecimal.ONE.scaleByPowerOfTen(-digits / 2).multiply(x.abs().max(BigDecimal.ONE));
-        BigInteger denCap = BigInteger.TEN.pow(Math.max(1, digits / 4));
+        BigInteger denCap = BigInteger.TEN.pow(Math.max(1, digits / 5));
         Rational rest = Rational.of(x);
         BigInteger h1 = BigInteger.ONE;
         BigInteger h2 = BigInteger.ZERO;
@@ -346,6 +402,10 @@ final class RootIsolation {
             return new Cx(nr.divide(den, mc), ni.divide(den, mc));
         }
 
+        Cx round(MathContext mc) {
+            return new Cx(re.round(mc), im.round(mc));
+        }
+
         boolean isZero() {
             return re.signum() == 0 && im.signum() == 0;
         }
@@ -360,10 +420,12 @@ final class RootIsolation {
      * Heuristic: Aberth–Ehrlich iteration z_i ← z_i − N_i / (1 − N_i Σ_{j≠i} 1/(z_i − z_j)),
      * N_i = q(z_i)/q'(z_i) (Aberth, Math. Comp. 27, 1973), in BigDecimal with a few guard
      * digits beyond {@code precBits}. Starts from {@code start} when it has deg q points,
-     * else from a circle of radius Fujiwara's bound 2 max_k |a_{n−k}|^(1/k) (a double, used
+     * else from the double-precision seeds of {@link #seedsInDoubles}, else from a circle of radius Fujiwara's bound 2 max_k |a_{n−k}|^(1/k) (a double, used
      * only to choose starting points). Stops when the largest relative correction is below
-     * 10^(−digits + 4) or after an iteration cap; the result may be inaccurate, which the
-     * certification detects.
+     * 10^(−digits + 12), or when it is already below 10^(−digits/4) and shrinks by less than
+     * a tenth in one sweep (the rounding noise of the evaluation is reached), or after an
+     * iteration cap. The
+     * result may be inaccurate, which the certification detects.
      */
     private static List<Cx> aberth(Poly q, List<Cx> start, int precBits) {
         int n = q.degree();
@@ -374,9 +436,13 @@ final class RootIsolation {
         MathContext mc = new MathContext(digits, RoundingMode.HALF_EVEN);
         Cx[] z = new Cx[n];
         int maxIter;
-        if (start != null && start.size() == n) {
+        if (start == null || start.size() != n) {
+            start = seedsInDoubles(q);
+        }
+        if (start != null) {
             z = start.toArray(z);
-            maxIter = 40 + 2 * n;
+            spreadCoincident(z, digits, mc);
+            maxIter = 100 + 10 * n;
         } else {
             double logRadius = Double.NEGATIVE_INFINITY;
             for (int k = 1; k <= n; k++) {
@@ -402,6 +468,8 @@ final class RootIsolation {
             dcoef.add(new Cx(r.toBigDecimal(mc), BigDecimal.ZERO));
         }
         BigDecimal tol = BigDecimal.ONE.scaleByPowerOfTen(-(digits - 12));
+        BigDecimal noise = BigDecimal.ONE.scaleByPowerOfTen(-(digits / 4));
+        BigDecimal previous = null;
         Cx one = new Cx(BigDecimal.ONE, BigDecimal.ZERO);
         for (int iter = 0; iter < maxIter; iter++) {
             BigDecimal worst = BigDecimal.ZERO;
@@ -415,7 +483,7 @@ final class RootIsolation {
                 for (int j = 0; j < n; j++) {
                     Cx diff = z[i].subtract(z[j]);
                     if (j != i && !diff.isZero()) {
-                        sum = sum.add(one.divide(diff, mc));
+                        sum = sum.add(one.divide(diff, mc)).round(mc);
                     }
                 }
                 Cx step;
@@ -426,21 +494,125 @@ final class RootIsolation {
                     Cx den = one.subtract(newton.multiply(sum, mc));
                     step = den.isZero() ? newton : newton.divide(den, mc);
                 }
-                z[i] = z[i].subtract(step);
+                z[i] = z[i].subtract(step).round(mc);
                 BigDecimal rel = step.normEstimate().divide(z[i].normEstimate().max(BigDecimal.ONE), MathContext.DECIMAL64);
                 worst = worst.max(rel);
             }
-            if (worst.compareTo(tol) <= 0) {
+            if (worst.compareTo(tol) <= 0
+                    || worst.compareTo(noise) <= 0 && previous != null && worst.compareTo(previous.multiply(STALL)) >= 0) {
+                break;
+            }
+            previous = worst;
+        }
+        return new ArrayList<>(List.of(z));
+    }
+
+    /**
+     * Heuristic: approximations that agree to about half the working digits (typically the
+     * members of a root cluster, rounded alike at the previous precision) are moved apart on
+     * a small circle of that relative size, each in its own direction; the Aberth correction
+     * of coinciding points is identical, so without this they would never separate.
+     */
+    private static void spreadCoincident(Cx[] z, int digits, MathContext mc) {
+        BigDecimal near = BigDecimal.ONE.scaleByPowerOfTen(-(digits / 2 - 8));
+        int n = z.length;
+        for (int i = 0; i < n; i++) {
+            BigDecimal scale = near.multiply(z[i].normEstimate().max(BigDecimal.ONE));
+            for (int j = 0; j < n; j++) {
+                if (j != i && z[i].subtract(z[j]).normEstimate().compareTo(scale) <= 0) {
+                    double angle = 2 * Math.PI * i / n + 0.3;
+                    Cx shift = new Cx(scale.multiply(new BigDecimal(Math.cos(angle))), scale.multiply(new BigDecimal(Math.sin(angle))));
+                    z[i] = z[i].add(shift).round(mc);
+                    break;
+                }
+            }
+        }
+    }
+
+    /**
+     * Heuristic: the same Aberth iteration in complex doubles, from a circle of radius
+     * Fujiwara's bound, as cheap starting points for the BigDecimal iteration; null when a
+     * coefficient ratio or an iterate leaves the double range.
+     */
+    private static List<Cx> seedsInDoubles(Poly q) {
+        int n = q.degree();
+        double[] c = new double[n + 1];
+        double bound = 0;
+        for (int k = 0; k <= n; k++) {
+            c[k] = q.coefficient(k).doubleEstimate();
+            if (!Double.isFinite(c[k])) {
+                return null;
+            }
+            if (k < n && c[k] != 0) {
+                bound = Math.max(bound, Math.pow(Math.abs(c[k]), 1.0 / (n - k)));
+            }
+        }
+        double radius = 2 * Math.max(bound, Double.MIN_NORMAL);
+        double[] re = new double[n];
+        double[] im = new double[n];
+        for (int k = 0; k < n; k++) {
+            re[k] = radius * Math.cos(2 * Math.PI * k / n + 0.7);
+            im[k] = radius * Math.sin(2 * Math.PI * k / n + 0.7);
+        }
+        for (int iter = 0; iter < 500 + 20 * n; iter++) {
+            double worst = 0;
+            for (int i = 0; i < n; i++) {
+                double pr = 0;
+                double pi = 0;
+                double dr = 0;
+                double di = 0;
+                for (int k = n; k >= 0; k--) {
+                    double ndr = dr * re[i] - di * im[i] + pr;
+                    di = dr * im[i] + di * re[i] + pi;
+                    dr = ndr;
+                    double npr = pr * re[i] - pi * im[i] + c[k];
+                    pi = pr * im[i] + pi * re[i];
+                    pr = npr;
+                }
+                double dd = dr * dr + di * di;
+                if (dd == 0) {
+                    continue;
+                }
+                double nr = (pr * dr + pi * di) / dd;
+                double ni = (pi * dr - pr * di) / dd;
+                double sr = 0;
+                double si = 0;
+                for (int j = 0; j < n; j++) {
+                    double xr = re[i] - re[j];
+                    double xi = im[i] - im[j];
+                    double xx = xr * xr + xi * xi;
+                    if (j != i && xx != 0) {
+                        sr += xr / xx;
+                        si -= xi / xx;
+                    }
+                }
+                double er = 1 - (nr * sr - ni * si);
+                double ei = -(nr * si + ni * sr);
+                double ee = er * er + ei * ei;
+                double wr = ee == 0 ? nr : (nr * er + ni * ei) / ee;
+                double wi = ee == 0 ? ni : (ni * er - nr * ei) / ee;
+                re[i] -= wr;
+                im[i] -= wi;
+                worst = Math.max(worst, Math.hypot(wr, wi) / Math.max(1, Math.hypot(re[i], im[i])));
+            }
+            if (!Double.isFinite(worst)) {
+                return null;
+            }
+            if (worst < 1e-14) {
                 break;
             }
         }
-        return new ArrayList<>(List.of(z));
+        List<Cx> out = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            out.add(new Cx(new BigDecimal(re[i]), new BigDecimal(im[i])));
+        }
+        return out;
     }
 
     private static Cx horner(List<Cx> coef, Cx z, MathContext mc) {
         Cx r = new Cx(BigDecimal.ZERO, BigDecimal.ZERO);
         for (int k = coef.size() - 1; k >= 0; k--) {
-            r = r.multiply(z, mc).add(coef.get(k));
+            r = r.multiply(z, mc).add(coef.get(k)).round(mc);
         }
         return r;
     }

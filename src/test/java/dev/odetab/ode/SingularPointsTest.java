@@ -17,6 +17,7 @@ import org.apfloat.Apcomplex;
 import org.apfloat.ApcomplexMath;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 class SingularPointsTest {
@@ -205,19 +206,32 @@ class SingularPointsTest {
         }
         List<Apcomplex> out = new ArrayList<>();
         for (Complex z : new LaguerreSolver().solveAllComplex(d, 0.3)) {
-            Apcomplex x = new Apcomplex(new Apfloat(z.getReal(), REF_DIGITS), new Apfloat(z.getImaginary(), REF_DIGITS));
-            for (int it = 0; it < 10; it++) {
-                Apcomplex v = Apcomplex.ZERO;
-                Apcomplex dv = Apcomplex.ZERO;
-                for (int i = c.length - 1; i >= 0; i--) {
-                    dv = dv.multiply(x).add(v);
-                    v = v.multiply(x).add(new Apfloat(c[i], REF_DIGITS));
-                }
-                x = x.subtract(v.divide(dv));
-            }
-            out.add(x);
+            out.add(newton(c, new Apcomplex(new Apfloat(z.getReal(), REF_DIGITS), new Apfloat(z.getImaginary(), REF_DIGITS))));
         }
         return out;
+    }
+
+    /** Ten Newton steps for Σ c[i] x^i in apfloat 1.15.0 arithmetic at the precision of the seed. */
+    private static Apcomplex newton(long[] c, Apcomplex seed) {
+        Apcomplex x = seed;
+        for (int it = 0; it < 10; it++) {
+            Apcomplex v = Apcomplex.ZERO;
+            Apcomplex dv = Apcomplex.ZERO;
+            for (int i = c.length - 1; i >= 0; i--) {
+                dv = dv.multiply(x).add(v);
+                v = v.multiply(x).add(new Apfloat(c[i], seed.precision()));
+            }
+            x = x.subtract(v.divide(dv));
+        }
+        return x;
+    }
+
+    private static List<Apcomplex> referenceRoots(Poly p) {
+        long[] c = new long[p.degree() + 1];
+        for (int i = 0; i < c.length; i++) {
+            c[i] = p.coefficient(i).numerator().longValueExact();
+        }
+        return referenceRoots(c);
     }
 
     private static void assertEachReferenceInExactlyOneDisk(List<Apcomplex> refs, List<SingularPoint> pts) {
@@ -255,7 +269,9 @@ class SingularPointsTest {
         }
         assertEquals(1, real);
         BigDecimal cbrt2 = dec(ApfloatMath.cbrt(new Apfloat(2, REF_DIGITS)));
-        assertTrue(pts.get(2).location().contains(cbrt2, BigDecimal.ZERO) || pts.get(1).location().contains(cbrt2, BigDecimal.ZERO));
+        // sorted by real part: the conjugate pair at -2^(1/3)/2 first, lower half-plane first, then 2^(1/3)
+        assertTrue(pts.get(2).location().contains(cbrt2, BigDecimal.ZERO));
+        assertTrue(pts.get(0).location().im().signum() < 0 && pts.get(1).location().im().signum() > 0);
         // distance from 0 to every root is 2^(1/3): the bound lies just below it
         BigDecimal bound = SingularPoints.radiusLowerBound(eq(poly(-2, 0, 0, 1), Poly.ZERO, poly(1)), Rational.ZERO);
         assertTrue(bound.compareTo(cbrt2) <= 0);
@@ -292,15 +308,81 @@ class SingularPointsTest {
     }
 
     @Test
-    void closeRootsNeedMorePrecision() {
-        // Mignotte-type x^7 - 2 (100 x - 1)^2: two real roots about 1e-14 apart near 1/100
-        Poly sq = poly(-1, 100).pow(2).scale(Rational.of(-2));
-        Poly p2 = poly(0, 0, 0, 0, 0, 0, 0, 1).add(sq);
-        List<SingularPoint> pts = SingularPoints.of(eq(p2, Poly.ZERO, poly(1)));
+    void closeRealRootsAreSeparated() {
+        // Mignotte-type x^7 - 2 (10^6 x - 1)^2: two real roots 1e-6 ± about 7e-28, with five others
+        Poly p2 = Poly.X.pow(7).add(poly(-1, 1_000_000).pow(2).scale(Rational.of(-2)));
+        Equation e = eq(p2, Poly.ZERO, poly(1));
+        List<SingularPoint> pts = SingularPoints.of(e);
         assertEquals(7, pts.size());
         assertPairwiseDisjoint(pts);
         assertEquals(3, pts.stream().filter(SingularPoint::real).count());
-        BigDecimal distance = SingularPoints.radiusLowerBound(eq(p2, Poly.ZERO, poly(1)), Rational.ZERO);
-        assertTrue(distance.compareTo(new BigDecimal("0.0099")) > 0 && distance.compareTo(new BigDecimal("0.01")) < 0, distance.toString());
+        // reference: x^7 = 2 (10^6 x - 1)^2 gives x ≈ 1e-6 ± sqrt(1e-42 / 2) / 1e6; polished by apfloat
+        // Newton at 200 digits (evaluating near 1e-6 cancels about 42 of them)
+        long[] c = new long[8];
+        for (int i = 0; i < 8; i++) {
+            c[i] = p2.coefficient(i).numerator().longValueExact();
+        }
+        BigDecimal micro = new BigDecimal("1e-6");
+        for (int k = 0; k < 2; k++) {
+            Apfloat seed = new Apfloat("1e-6", 200).add(new Apfloat(k == 0 ? "-7.0710678e-28" : "7.0710678e-28", 200));
+            Apcomplex root = newton(c, new Apcomplex(seed));
+            SingularPoint p = pts.get(2 + k);
+            assertTrue(p.location().contains(dec(root.real()), dec(root.imag())), root + " not in " + p.location());
+            assertTrue(p.real());
+        }
+        BigDecimal distance = SingularPoints.radiusLowerBound(e, Rational.ZERO);
+        assertTrue(distance.compareTo(new BigDecimal("0.99999999999999999999e-6")) > 0 && distance.compareTo(micro) < 0, distance.toString());
+    }
+
+    @Test
+    void degreeTwentyPerturbedWilkinson() {
+        // Π_{i=1..20} (x - i) + 2^-23 x^19 (Wilkinson's perturbation): ten real roots and five conjugate pairs
+        Poly w = Poly.ONE;
+        for (int i = 1; i <= 20; i++) {
+            w = w.multiply(poly(-i, 1));
+        }
+        w = w.add(Poly.X.pow(19).scale(Rational.of(1, 1L << 23)));
+        List<SingularPoint> pts = SingularPoints.of(eq(w, Poly.ZERO, poly(1)));
+        assertEquals(20, pts.size());
+        assertPairwiseDisjoint(pts);
+        assertEquals(10, pts.stream().filter(SingularPoint::real).count());
+        for (int i = 10; i < 20; i += 2) {
+            // conjugate pairs come out with exactly conjugate centers, lower half-plane first
+            assertEquals(pts.get(i).location().re(), pts.get(i + 1).location().re());
+            assertEquals(pts.get(i).location().im().negate(), pts.get(i + 1).location().im());
+            assertTrue(pts.get(i).location().im().signum() < 0);
+        }
+    }
+
+    @Test
+    void isolationRejectsInputsThatBreakItsPreconditions() {
+        // a double root can never get an isolating Weierstrass disk: refused up front
+        assertThrows(IllegalArgumentException.class, () -> RootIsolation.isolate(List.of(poly(-2, 0, 1).pow(2))));
+        assertThrows(IllegalArgumentException.class, () -> RootIsolation.isolate(List.of(poly(-2, 0, 1), poly(-2, 0, 1).multiply(poly(1, 1)))));
+    }
+
+    @Test
+    void clusterBelowTheStartingPrecisionIsResolved() {
+        // (x^2 - 2)^2 - 10^-250: pairs sqrt(2 ± 10^-125), about 3.5e-126 apart: needs about 1024 bits
+        Poly q = poly(-2, 0, 1).pow(2).subtract(Poly.constant(Rational.of(java.math.BigInteger.ONE, java.math.BigInteger.TEN.pow(250))));
+        List<SingularPoint> pts = SingularPoints.of(eq(q, Poly.ZERO, poly(1)));
+        assertEquals(4, pts.size());
+        assertPairwiseDisjoint(pts);
+        // reference: sqrt(2 ± 10^-125) by apfloat 1.15.0 ApfloatMath.sqrt at 800 digits (the sum carries
+        // only the digits of its terms, hence the explicit precision)
+        Apfloat tiny = new Apfloat("1e-125", 800);
+        Apfloat two = new Apfloat(2, 800);
+        assertTrue(pts.get(2).location().contains(dec(ApfloatMath.sqrt(two.subtract(tiny).precision(800))), BigDecimal.ZERO));
+        assertTrue(pts.get(3).location().contains(dec(ApfloatMath.sqrt(two.add(tiny).precision(800))), BigDecimal.ZERO));
+        assertTrue(pts.get(0).location().contains(dec(ApfloatMath.sqrt(two.add(tiny).precision(800)).negate()), BigDecimal.ZERO));
+        assertTrue(pts.stream().allMatch(SingularPoint::real));
+    }
+
+    @Test
+    @Tag("slow")
+    void rootsCloserThanThePrecisionCapAreReportedNotGuessed() {
+        // (x^2 - 2)^2 - 10^-1400: two roots about 10^-700 apart near each of ±sqrt 2, finer than 2048 bits (617 digits)
+        Poly q = poly(-2, 0, 1).pow(2).subtract(Poly.constant(Rational.of(java.math.BigInteger.ONE, java.math.BigInteger.TEN.pow(1400))));
+        assertThrows(ArithmeticException.class, () -> SingularPoints.of(eq(q, Poly.ZERO, poly(1))));
     }
 }
