@@ -387,7 +387,7 @@ public final class BallFunctions {
      * {@link #log}, with the sign (−1)^p for a negative base and odd q. By convention x^0 = 1.
      *
      * @throws ArithmeticException when the base may be 0 and the exponent is negative, when q is
-     *     even and the base may be negative, or when |p| exceeds 2^31 − 1
+     *     even and the base may be negative, or when |p| &gt;= 2^30
      */
     public static Ball pow(Ball base, Rational exponent, int precBits) {
         if (exponent.isZero()) {
@@ -401,7 +401,7 @@ public final class BallFunctions {
         }
         BigInteger p = exponent.numerator();
         BigInteger q = exponent.denominator();
-        if (p.bitLength() > 31) {
+        if (p.bitLength() > 30) {
             throw new ArithmeticException("exponent numerator too large: " + exponent);
         }
         int pInt = p.intValueExact();
@@ -420,6 +420,11 @@ public final class BallFunctions {
                 r = Ball.ONE.divide(r, wp);
             }
             return r.round(precBits);
+        }
+        if (base.lower().signum() == 0) {
+            // t ↦ t^(p/q) is increasing on [0, ∞) for p/q > 0 and vanishes at 0
+            Ball atUpper = pow(Ball.exact(base.upper()), exponent, precBits + GUARD_BITS);
+            return Ball.fromEndpoints(BigDecimal.ZERO, atUpper.upper()).round(precBits);
         }
         boolean negativeBase = base.upper().signum() < 0;
         if (negativeBase && !qOdd) {

@@ -249,6 +249,11 @@ class BallFunctionsTest {
                 b -> BallFunctions.gamma(b, p), ApfloatMath::gamma, p);
         assertContainsBothEnds("pow", x, b -> BallFunctions.pow(b, Ball.exact(new BigDecimal("2.5")), p),
                 a -> ApfloatMath.pow(a, new Apfloat("2.5", a.precision())), p);
+        // a base ball touching 0 with a positive exponent of large denominator: [0, 0.5^(1/20)]
+        Ball touching = BallFunctions.pow(Ball.fromEndpoints(BigDecimal.ZERO, new BigDecimal("0.5")), Rational.of(1, 20), p);
+        assertTrue(touching.contains(BigDecimal.ZERO), touching::toString);
+        assertContains("0.5^(1/20)", touching,
+                ApfloatMath.root(ap("0.5", referenceDigits(p)), 20), p);
         // a ball around the minimum of Γ on (0, ∞) at 1.4616…: both ends and the minimum
         Ball aroundMin = Ball.of(new BigDecimal("1.45"), new BigDecimal("0.2"));
         assertContainsBothEnds("gamma", aroundMin, b -> BallFunctions.gamma(b, p), ApfloatMath::gamma, p);
