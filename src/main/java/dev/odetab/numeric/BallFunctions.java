@@ -593,7 +593,8 @@ public final class BallFunctions {
 
     /**
      * Smallest N whose first neglected Stirling term is estimated below 2^-(wp+10), using
-     * |B_{2N}| ≈ 2 (2N)! / (2π)^(2N) (DLMF 24.11.1 to leading order). Heuristic: N only.
+     * |B_{2N}| ≈ 2 (2N)! / (2π)^(2N) (from |B_{2N}| = 2 (2N)! ζ(2N) / (2π)^(2N), ζ(2N) ≈ 1).
+     * Heuristic: chooses N only.
      */
     private static int stirlingTermCount(double log2ZEstimate, int wp) {
         double log2TwoPi = Math.log(2 * Math.PI) / Math.log(2);
