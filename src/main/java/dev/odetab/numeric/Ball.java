@@ -167,7 +167,12 @@ public record Ball(BigDecimal mid, BigDecimal rad) {
         }
         MathContext mc = Precision.midpoint(precBits);
         BigDecimal m = mid.divide(o.mid, mc);
-        BigDecimal roundErr = m.signum() == 0 ? BigDecimal.ZERO : m.ulp();
+        // An exact quotient may come back with few digits (1/5 = 0.2), so its own ulp would be a
+        // needlessly large bound; an inexact one is rounded to the context's digits, so its
+        // error is below one unit in digit mc.getPrecision() of m: 10^(e − digits), m < 10^e.
+        BigDecimal roundErr = m.multiply(o.mid).compareTo(mid) == 0
+                ? BigDecimal.ZERO
+                : BigDecimal.ONE.scaleByPowerOfTen(m.precision() - m.scale() - mc.getPrecision());
         BigDecimal r = BigDecimal.ZERO;
         if (rad.signum() != 0 || o.rad.signum() != 0) {
             BigDecimal num = Directed.up(rad.multiply(o.mid.abs()).add(mid.abs().multiply(o.rad)));
