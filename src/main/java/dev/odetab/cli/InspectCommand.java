@@ -1,5 +1,6 @@
 package dev.odetab.cli;
 
+import dev.odetab.expr.ConstExpr;
 import dev.odetab.expr.ExprException;
 import dev.odetab.expr.RationalFunction;
 import dev.odetab.numeric.Ball;
@@ -77,18 +78,20 @@ final class InspectCommand implements Callable<Integer> {
                     out.println("                " + s);
                 }
             }
-            out.println("normalization   y(" + f.at().toDecimalOrFraction() + ") = " + f.value() + " = " + show(f.value().evaluate(WORK_BITS)));
-            out.println("                y'(" + f.at().toDecimalOrFraction() + ") = " + f.slope() + " = " + show(f.slope().evaluate(WORK_BITS)));
+            out.println("normalization   y(" + f.at().toDecimalOrFraction() + ") = " + constant(f.value()));
+            out.println("                y'(" + f.at().toDecimalOrFraction() + ") = " + constant(f.slope()));
             BigDecimal radius = SingularPoints.radiusLowerBound(eq, x);
-            out.println("radius at " + x.toDecimalOrFraction() + "    " + (radius == null
-                    ? "infinite: every solution is entire (no singular point)"
-                    : ">= " + radius.stripTrailingZeros().toPlainString() + " (distance to the nearest singular point, rounded down)"));
+            out.println("radius          " + (radius == null
+                    ? "infinite at x = " + x.toDecimalOrFraction() + ": every solution is entire (no singular point)"
+                    : ">= " + radius.stripTrailingZeros().toPlainString() + " at x = " + x.toDecimalOrFraction()
+                            + " (distance to the nearest singular point, rounded down)"));
             Recurrence rec = new Recurrence(eq, x);
             out.println("recurrence      with t = x - " + x.toDecimalOrFraction() + ", y = sum c(m)*t^m, for m >= 2:");
             out.println("                " + rec.describe());
             Jet jet = FunctionEvaluator.enclose(f, x, WORK_BITS).jet();
             Ball[] c = LocalSeries.coefficients(rec, jet.value(), jet.derivative(), COEFFICIENTS, WORK_BITS);
-            out.println("taylor at " + x.toDecimalOrFraction() + "    (first " + COEFFICIENTS + " coefficients, " + SHOW_DIGITS + " digits)");
+            out.println("taylor          first " + COEFFICIENTS + " coefficients at x = " + x.toDecimalOrFraction()
+                    + ", correctly rounded to " + SHOW_DIGITS + " digits (or the enclosure when it cannot decide them)");
             for (int m = 0; m < c.length; m++) {
                 out.println("                c(" + m + ") = " + show(c[m]));
             }
@@ -112,6 +115,12 @@ final class InspectCommand implements Callable<Integer> {
         f.parameters().entrySet().stream().sorted(java.util.Map.Entry.comparingByKey())
                 .forEach(e -> sb.append(sb.length() == 0 ? "" : ", ").append(e.getKey()).append(" = ").append(e.getValue().toDecimalOrFraction()));
         return sb.toString();
+    }
+
+    /** The expression, and its value when the expression is not already a plain number. */
+    private static String constant(ConstExpr e) throws ExprException {
+        String value = show(e.evaluate(WORK_BITS));
+        return e instanceof ConstExpr.Number ? value : e + " = " + value;
     }
 
     /** Correctly rounded to 20 digits when the enclosure decides it, else the enclosure itself. */

@@ -37,7 +37,7 @@ public final class Continuation {
      */
     public static Result evaluate(Equation equation, Rational from, Jet start, Rational to, int precBits) {
         Equation eq = equation.reduced();
-        checkPath(eq, from, to);
+        checkPath(eq, equation, from, to);
         Rational center = from;
         Jet state = start;
         int steps = 0;
@@ -84,7 +84,7 @@ public final class Continuation {
     }
 
     /** Throws when a real root of P2 lies on the closed segment between the two points. */
-    static void checkPath(Equation reduced, Rational from, Rational to) {
+    static void checkPath(Equation reduced, Equation original, Rational from, Rational to) {
         Poly p2 = reduced.p2();
         Rational lo = from.min(to);
         Rational hi = from.max(to);
@@ -108,7 +108,7 @@ public final class Continuation {
             }
         }
         String where = describeRoot(p2, a, b);
-        throw new SingularCrossingException("x = " + where + " is a singular point of " + reduced
+        throw new SingularCrossingException("x = " + where + " is a singular point of " + original
                 + " and lies between " + from.toDecimalOrFraction() + " and " + to.toDecimalOrFraction()
                 + "; a solution cannot be continued through it");
     }

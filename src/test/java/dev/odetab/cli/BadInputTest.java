@@ -1,0 +1,86 @@
+package dev.odetab.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import org.junit.jupiter.api.Test;
+
+/** Bad input: exit code 2, one message that says where and what, never a stack trace. */
+class BadInputTest {
+    private static final String DIR = "src/test/resources/specs/";
+
+    private static void expect(String message, String... args) {
+        CliRunner.Result r = CliRunner.run(args);
+        assertEquals(2, r.code(), "exit code for " + String.join(" ", args) + "; stderr: " + r.err());
+        assertEquals("odetab: " + message + "\n", r.err());
+        assertEquals("", r.out());
+    }
+
+    @Test
+    void malformedExpressionInAParameter() {
+        expect("argument 4 'n=1+', column 5: expected a number, a name or '(' after '+', found the end of the text",
+                "eval", "hermite-function", "-p", "n=1+", "0.5");
+    }
+
+    @Test
+    void malformedExpressionInASpec() {
+        expect(DIR + "bad-value.toml:3:17: expected a number, a name or '(' after '+', found ')'",
+                "eval", DIR + "bad-value.toml#f", "1");
+    }
+
+    @Test
+    void nonLinearEquationInASpec() {
+        expect(DIR + "bad-equation.toml:2:20: the equation must be linear in y: a product of two terms in y",
+                "eval", DIR + "bad-equation.toml#f", "1");
+    }
+
+    @Test
+    void singularNormalizationPoint() {
+        expect(DIR + "singular-at.toml:3:1: x = 1 is a singular point of the equation (its coefficient of y'' vanishes there); choose an ordinary point",
+                "eval", DIR + "singular-at.toml#p", "0.5");
+    }
+
+    @Test
+    void unknownFamily() {
+        expect("argument 2 'airy-aj', column 1: unknown function 'airy-aj'; did you mean 'airy-ai'? "
+                + "(built-in families: airy-ai, airy-bi, hermite-function, weber-u; or SPEC#NAME for a spec function)",
+                "eval", "airy-aj", "1");
+    }
+
+    @Test
+    void unknownFamilyInASpec() {
+        expect(DIR + "unknown-family.toml:2:1: unknown family 'hermite-functoin'; did you mean 'hermite-function'? "
+                + "(known: airy-ai, airy-bi, hermite-function, weber-u)",
+                "eval", DIR + "unknown-family.toml#f", "1");
+    }
+
+    @Test
+    void unknownParameter() {
+        expect("argument 4 'm=3', column 1: unknown parameter 'm' for hermite-function; did you mean 'n'? (its parameters: n)",
+                "eval", "hermite-function", "-p", "m=3", "1");
+    }
+
+    @Test
+    void parameterOutOfRange() {
+        expect("argument 4 'n=-1', column 1: n = -1 is outside the allowed range: an integer 0 <= n <= 10000",
+                "eval", "hermite-function", "-p", "n=-1", "1");
+    }
+
+    @Test
+    void pointBeyondASingularPoint() {
+        expect("x = 1 is a singular point of (-x^2 + 1)*y'' - 2*x*y' + 30*y = 0 and lies between 0 and 1.5; "
+                + "a solution cannot be continued through it", "eval", DIR + "functions.toml#legendre5", "3/2");
+    }
+
+    @Test
+    void malformedPoint() {
+        expect("argument 3 '1/3x', column 1: '1/3x' is not an exact decimal or rational (like -7.25, 1e-3 or 1/3)",
+                "eval", "airy-ai", "1/3x");
+    }
+
+    @Test
+    void precisionRequestAboveTheCap() {
+        expect("argument 3 '--digits', column 1: --digits 3000 needs at least 9999 bits of working precision, "
+                + "above the precision cap of 8192 bits (raise it with --precision-cap-bits)",
+                "eval", "airy-ai", "--digits", "3000", "1");
+    }
+}
