@@ -53,6 +53,7 @@ class HermiteFunctionTest {
         BigDecimal r = new BigDecimal(ref.toString(true));
         BigDecimal tol = new BigDecimal("1e-55");
         assertTrue(b.addError(tol).contains(r), what + ": " + r + " not in " + b);
-        assertTrue(b.rad().compareTo(new BigDecimal("1e-50")) < 0, what + " too wide: " + b);
+        // 200 bits is about 60 digits; up to 20 of them may go to cancellation at |x| near 5
+        assertTrue(b.rad().compareTo(new BigDecimal("1e-40")) < 0, what + " too wide: " + b);
     }
 }
