@@ -7,7 +7,6 @@ import dev.odetab.expr.Syntax.Group;
 import dev.odetab.expr.Syntax.Neg;
 import dev.odetab.expr.Syntax.Node;
 import dev.odetab.numeric.Rational;
-import dev.odetab.ode.Equation;
 import java.util.Map;
 
 /**
@@ -20,7 +19,7 @@ import java.util.Map;
  * {@code y''*(x^2+4)}, {@code x^2*y''/4}); coefficients may be rational functions of x, and
  * the equation is then multiplied by the monic lcm of their denominators
  * ({@code y'' + y'/x + y = 0} gives {@code x*y'' + y' + x*y = 0}). Nothing else is changed:
- * no common factor or constant is divided out (see {@link Equation#reduced()}).
+ * no common factor or constant is divided out (see {@code Equation.reduced()} in the ode package).
  *
  * <p>Trust level: Exact.
  */
@@ -39,7 +38,7 @@ public final class EquationParser {
      *     no y", at the term); no y'' ("no y'' term: not a second-order equation", column 1)
      * @throws IllegalArgumentException when a parameter name is not an identifier or clashes with a built-in name
      */
-    public static Equation parse(String text, Map<String, Rational> params) throws ExprException {
+    public static ParsedEquation parse(String text, Map<String, Rational> params) throws ExprException {
         EquationNode eq = Syntax.parseEquation(text, params);
         Linear linear = new Linear(params, "coefficients of the equation");
         Form form = linear.form(eq.left()).add(linear.form(eq.right()).negate());
@@ -61,7 +60,7 @@ public final class EquationParser {
                     : "no y'' term: not a second-order equation");
         }
         Poly lcm = lcm(lcm(form.d2().denominator(), form.d1().denominator()), form.d0().denominator());
-        return new Equation(cleared(form.d2(), lcm), cleared(form.d1(), lcm), cleared(form.d0(), lcm));
+        return new ParsedEquation(cleared(form.d2(), lcm), cleared(form.d1(), lcm), cleared(form.d0(), lcm));
     }
 
     private static Poly lcm(Poly a, Poly b) {

@@ -1,5 +1,6 @@
 package dev.odetab.ode;
 
+import dev.odetab.expr.ParsedEquation;
 import dev.odetab.expr.Poly;
 import dev.odetab.numeric.Rational;
 
@@ -15,6 +16,11 @@ public record Equation(Poly p2, Poly p1, Poly p0) {
         if (p2.isZero()) {
             throw new IllegalArgumentException("the coefficient of y'' is zero: not a second-order equation");
         }
+    }
+
+    /** The equation as parsed from text. */
+    public static Equation of(ParsedEquation parsed) {
+        return new Equation(parsed.p2(), parsed.p1(), parsed.p0());
     }
 
     /** Common factors removed, P2 monic. */

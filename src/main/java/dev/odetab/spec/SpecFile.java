@@ -127,7 +127,7 @@ public final class SpecFile {
         String eqText = string(base, f, "equation");
         Equation eq;
         try {
-            eq = EquationParser.parse(eqText, Map.of());
+            eq = Equation.of(EquationParser.parse(eqText, Map.of()));
         } catch (ExprException e) {
             throw errorInString(child(base, "equation"), e.column(), e.getMessage());
         }

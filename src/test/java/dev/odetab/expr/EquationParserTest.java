@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import dev.odetab.numeric.Rational;
-import dev.odetab.ode.Equation;
 import java.util.Map;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
@@ -30,7 +29,7 @@ class EquationParserTest {
 
     private static void assertEquation(Poly p2, Poly p1, Poly p0, String text, Map<String, Rational> params)
             throws ExprException {
-        Equation e = EquationParser.parse(text, params);
+        ParsedEquation e = EquationParser.parse(text, params);
         assertEquals(p2, e.p2(), "P2 of " + text);
         assertEquals(p1, e.p1(), "P1 of " + text);
         assertEquals(p0, e.p0(), "P0 of " + text);

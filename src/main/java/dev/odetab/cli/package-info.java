@@ -1,0 +1,4 @@
+/**
+ * The command line: commands, options, exit codes and messages. Nothing numeric happens here.
+ */
+package dev.odetab.cli;
