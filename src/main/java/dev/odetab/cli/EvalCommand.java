@@ -70,7 +70,9 @@ final class EvalCommand implements Callable<Integer> {
             for (int i = 0; i < xs.size(); i++) {
                 FunctionEvaluator.Rounded r = FunctionEvaluator.digits(f, xs.get(i), derivative, digits, capBits);
                 out.println(points.get(i) + "\t" + DecimalDigits.format(r.value(), digits));
-                if (verbose) {
+                if (verbose && r.exact()) {
+                    err.println("odetab: x = " + points.get(i) + ": exact (a polynomial solution, evaluated in rational arithmetic)");
+                } else if (verbose) {
                     err.println("odetab: x = " + points.get(i) + ": " + r.precBits() + " bits, " + r.attempts() + " attempt(s), "
                             + r.steps() + " step(s), " + r.terms() + " terms");
                 }

@@ -6,7 +6,13 @@ import dev.odetab.numeric.DecimalDigits;
 import dev.odetab.numeric.Precision;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.FunctionDef;
+import dev.odetab.expr.Poly;
 import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
+import java.util.Map;
+import java.util.Optional;
+import java.util.concurrent.ConcurrentHashMap;
 
 /**
  * Values of a {@link FunctionDef} at exact points, as enclosures or correctly rounded decimals.
@@ -21,15 +27,45 @@ public final class FunctionEvaluator {
     /** Extra bits for the normalization constants, so that they do not dominate the radius. */
     private static final int CONSTANT_GUARD_BITS = 16;
 
+    /** Degree bound for the search for polynomial solutions. */
+    private static final int MAX_POLYNOMIAL_DEGREE = 4096;
+    private static final Map<FunctionDef, Optional<Poly>> POLYNOMIALS = new ConcurrentHashMap<>();
+
     private FunctionEvaluator() {
+    }
+
+    /**
+     * The function as an exact polynomial in x, when its normalization constants are exact
+     * rationals and its series terminates ({@link ExactPolynomial}); empty otherwise.
+     */
+    public static Optional<Poly> polynomial(FunctionDef f) {
+        return POLYNOMIALS.computeIfAbsent(f, def -> {
+            Optional<Rational> y0 = def.value().exact();
+            Optional<Rational> y1 = def.slope().exact();
+            if (y0.isEmpty() || y1.isEmpty()) {
+                return Optional.empty();
+            }
+            return ExactPolynomial.detect(def.equation(), def.at(), y0.get(), y1.get(), MAX_POLYNOMIAL_DEGREE);
+        });
+    }
+
+    /**
+     * Exact y(x) (or y'(x)) when the function is a polynomial ({@link #polynomial}); empty
+     * otherwise. Trust level: Exact.
+     */
+    public static Optional<Rational> exact(FunctionDef f, Rational x, boolean derivative) {
+        return polynomial(f).map(p -> (derivative ? p.derivative() : p).evaluate(x));
     }
 
     /** An enclosure and the work that produced it. */
     public record Enclosure(Jet jet, int precBits, int steps, int terms) {
     }
 
-    /** A correctly rounded decimal and the work it took (the last, deciding, evaluation). */
-    public record Rounded(BigDecimal value, Ball enclosure, int precBits, int attempts, int steps, int terms) {
+    /**
+     * A correctly rounded decimal and the work it took (the last, deciding, evaluation);
+     * {@code exact} when it came from the exact polynomial path (no enclosure was needed).
+     */
+    public record Rounded(BigDecimal value, Ball enclosure, int precBits, int attempts, int steps, int terms, boolean exact) {
     }
 
     /**
@@ -39,6 +75,11 @@ public final class FunctionEvaluator {
      * @throws SingularCrossingException when a real singular point lies between the normalization point and x
      */
     public static Enclosure enclose(FunctionDef f, Rational x, int precBits) throws ExprException {
+        Optional<Poly> poly = polynomial(f);
+        if (poly.isPresent()) {
+            Jet exact = new Jet(Ball.of(poly.get().evaluate(x), precBits), Ball.of(poly.get().derivative().evaluate(x), precBits));
+            return new Enclosure(exact, precBits, 0, 0);
+        }
         Jet start = new Jet(f.value().evaluate(precBits + CONSTANT_GUARD_BITS),
                 f.slope().evaluate(precBits + CONSTANT_GUARD_BITS));
         Continuation.Result r = Continuation.evaluate(f.equation(), f.at(), start, x, precBits);
@@ -53,12 +94,17 @@ public final class FunctionEvaluator {
      */
     public static Rounded digits(FunctionDef f, Rational x, boolean derivative, int digits10, int capBits)
             throws ExprException, PrecisionCapException {
+        Optional<Rational> exact = exact(f, x, derivative);
+        if (exact.isPresent()) {
+            BigDecimal v = exact.get().toBigDecimal(new MathContext(digits10, RoundingMode.HALF_EVEN));
+            return new Rounded(v, Ball.of(exact.get(), Precision.bitsForDigits(digits10)), 0, 0, 0, 0, true);
+        }
         int needed = Precision.bitsForDigits(digits10);
         Enclosure[] last = new Enclosure[1];
         PrecisionLoop.Outcome<BigDecimal> out = PrecisionLoop.<BigDecimal, ExprException>run(prec -> {
             last[0] = enclose(f, x, prec);
             return derivative ? last[0].jet().derivative() : last[0].jet().value();
         }, b -> DecimalDigits.round(b, digits10), needed, needed + 32, capBits);
-        return new Rounded(out.result(), out.enclosure(), out.precBits(), out.attempts(), last[0].steps(), last[0].terms());
+        return new Rounded(out.result(), out.enclosure(), out.precBits(), out.attempts(), last[0].steps(), last[0].terms(), false);
     }
 }

@@ -68,7 +68,7 @@ class BadInputTest {
     @Test
     void pointBeyondASingularPoint() {
         expect("x = 1 is a singular point of (-x^2 + 1)*y'' - 2*x*y' + 30*y = 0 and lies between 0 and 1.5; "
-                + "a solution cannot be continued through it", "eval", DIR + "functions.toml#legendre5", "3/2");
+                + "a solution cannot be continued through it", "eval", DIR + "functions.toml#legendre5even", "3/2");
     }
 
     @Test
