@@ -31,6 +31,11 @@ public final class ExactPolynomial {
      * of degree at most {@code maxDegree}.
      */
     public static Optional<Poly> detect(Equation equation, Rational alpha, Rational y0, Rational y1, int maxDegree) {
+        int possible = largestPossibleDegree(equation.reduced());
+        if (possible < 0) {
+            return Optional.empty();
+        }
+        maxDegree = Math.min(maxDegree, possible);
         Recurrence rec = new Recurrence(equation, alpha);
         int order = rec.order();
         List<Rational> c = new ArrayList<>();
@@ -61,6 +66,49 @@ public final class ExactPolynomial {
             zerosInARow = cm.isZero() ? zerosInARow + 1 : 0;
         }
         return Optional.empty();
+    }
+
+    /**
+     * An upper bound on the degree of any polynomial solution, or −1 when there is none. If
+     * y = x^n + … solves the equation, the highest power of x in P2 y'' + P1 y' + P0 y must
+     * cancel: with D = max(deg P2 − 2, deg P1 − 1, deg P0), the coefficient of x^(n+D) is
+     * I(n) = [deg P2 − 2 = D] lc(P2) n(n−1) + [deg P1 − 1 = D] lc(P1) n + [deg P0 = D] lc(P0),
+     * so n is a non-negative integer root of I. When I vanishes identically every n is possible
+     * and Integer.MAX_VALUE is returned.
+     */
+    static int largestPossibleDegree(Equation eq) {
+        Poly p2 = eq.p2();
+        Poly p1 = eq.p1();
+        Poly p0 = eq.p0();
+        int d = Math.max(p2.degree() - 2, Math.max(p1.isZero() ? Integer.MIN_VALUE : p1.degree() - 1,
+                p0.isZero() ? Integer.MIN_VALUE : p0.degree()));
+        Rational a = p2.degree() - 2 == d ? p2.leadingCoefficient() : Rational.ZERO;
+        Rational b = !p1.isZero() && p1.degree() - 1 == d ? p1.leadingCoefficient() : Rational.ZERO;
+        Rational c = !p0.isZero() && p0.degree() == d ? p0.leadingCoefficient() : Rational.ZERO;
+        // I(n) = a n^2 + (b − a) n + c
+        Poly indicial = Poly.of(c, b.subtract(a), a);
+        if (indicial.isZero()) {
+            return Integer.MAX_VALUE;
+        }
+        int best = -1;
+        if (indicial.degree() == 0) {
+            return -1;
+        }
+        // integer roots divide the constant term of the primitive integer polynomial; search by
+        // bracketing instead: the roots are at most 1 + max |coefficient / leading| (Cauchy).
+        Poly prim = indicial.primitivePart();
+        Rational lead = prim.leadingCoefficient().abs();
+        Rational bound = Rational.ONE;
+        for (int i = 0; i < prim.degree(); i++) {
+            bound = bound.max(Rational.ONE.add(prim.coefficient(i).abs().divide(lead)));
+        }
+        long limit = bound.floor().min(BigInteger.valueOf(1_000_000)).longValueExact();
+        for (long n = 0; n <= limit; n++) {
+            if (prim.evaluate(Rational.of(n)).isZero()) {
+                best = (int) n;
+            }
+        }
+        return best;
     }
 
     private static int bits(Rational r) {

@@ -56,7 +56,7 @@ class TailBoundTest {
 
     private static double check(Equation eq, Rational alpha, Rational t) {
         Recurrence rec = new Recurrence(eq, alpha);
-        int total = 1200;
+        int total = 700;
         List<Rational> c = new ArrayList<>();
         c.add(Rational.ONE);
         c.add(Rational.of(1, 3));
