@@ -42,7 +42,7 @@ public final class ExactPolynomial {
         c.add(y0);
         c.add(y1);
         int zerosInARow = (y1.isZero() ? 1 : 0) + (y1.isZero() && y0.isZero() ? 1 : 0);
-        for (int m = 2; m <= maxDegree + order; m++) {
+        for (int m = 2; m <= maxDegree + order + 1; m++) {
             if (zerosInARow >= order) {
                 int degree = c.size() - 1;
                 while (degree >= 0 && c.get(degree).isZero()) {
