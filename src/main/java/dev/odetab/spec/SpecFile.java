@@ -10,6 +10,7 @@ import dev.odetab.ode.FunctionDef;
 import dev.odetab.ode.family.Catalog;
 import dev.odetab.ode.family.Family;
 import dev.odetab.ode.family.ParameterException;
+import dev.odetab.tables.TableDef;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -38,14 +39,18 @@ public final class SpecFile {
     static final Set<String> TOP_LEVEL_KEYS = Set.of("title", "functions", "tables");
     static final Set<String> EQUATION_KEYS = Set.of("equation", "at", "value", "slope");
 
+    private final Path path;
     private final String display;
     private final List<String> lines;
     private final TomlParseResult toml;
+    private final byte[] bytes;
 
-    private SpecFile(String display, List<String> lines, TomlParseResult toml) {
+    private SpecFile(Path path, String display, List<String> lines, TomlParseResult toml, byte[] bytes) {
+        this.path = path;
         this.display = display;
         this.lines = lines;
         this.toml = toml;
+        this.bytes = bytes;
     }
 
     /**
@@ -55,8 +60,10 @@ public final class SpecFile {
     public static SpecFile load(Path path) throws InputError {
         String display = path.toString();
         String text;
+        byte[] bytes;
         try {
-            text = Files.readString(path, StandardCharsets.UTF_8);
+            bytes = Files.readAllBytes(path);
+            text = new String(bytes, StandardCharsets.UTF_8);
         } catch (NoSuchFileException e) {
             throw new InputError(display, "no such spec file");
         } catch (IOException e) {
@@ -69,12 +76,18 @@ public final class SpecFile {
             String message = first.getMessage().replaceFirst("\\s*\\(line \\d+, column \\d+\\)$", "");
             throw new InputError(display + ":" + p.line() + ":" + p.column(), "TOML syntax: " + message);
         }
-        SpecFile spec = new SpecFile(display, text.lines().toList(), toml);
+        SpecFile spec = new SpecFile(path, display, text.lines().toList(), toml, bytes);
         for (String key : toml.keySet()) {
             if (!TOP_LEVEL_KEYS.contains(key)) {
                 throw spec.error(List.of(key), "unknown key '" + key + "'" + Suggestions.hint(key, TOP_LEVEL_KEYS)
                         + " (allowed at the top: " + String.join(", ", new TreeSet<>(TOP_LEVEL_KEYS)) + ")");
             }
+        }
+        if (toml.contains("title") && !(toml.get("title") instanceof String)) {
+            throw spec.error(List.of("title"), "'title' must be a string");
+        }
+        if (toml.contains("tables") && !toml.isTable("tables")) {
+            throw spec.error(List.of("tables"), "'tables' must be a table of tables ([tables.NAME])");
         }
         if (toml.contains("functions") && !toml.isTable("functions")) {
             throw spec.error(List.of("functions"), "'functions' must be a table of functions ([functions.NAME])");
@@ -84,6 +97,26 @@ public final class SpecFile {
 
     public String display() {
         return display;
+    }
+
+    public Path path() {
+        return path;
+    }
+
+    /** The file's bytes as read (for its SHA-256 in provenance). */
+    public byte[] bytes() {
+        return bytes.clone();
+    }
+
+    /** The spec's title, or empty. */
+    public String title() {
+        return toml.contains("title") ? toml.getString("title") : "";
+    }
+
+    /** Every table of the spec, validated; the first problem found is the error. */
+    public List<TableDef> tables() throws InputError {
+        Path dir = path.toAbsolutePath().getParent();
+        return new SpecTables(this, toml, dir).all();
     }
 
     /** Names of the functions defined in {@code [functions.*]}, in file order. */
@@ -190,7 +223,7 @@ public final class SpecFile {
         throw error(key, "a parameter must be an integer or a string holding an exact rational");
     }
 
-    private ConstExpr constant(List<String> key, String text) throws InputError {
+    ConstExpr constant(List<String> key, String text) throws InputError {
         try {
             ConstExpr e = ExprParser.parseConstant(text, Map.of());
             e.evaluate(64);

@@ -1,0 +1,304 @@
+package dev.odetab.spec;
+
+import dev.odetab.expr.ConstExpr;
+import dev.odetab.numeric.Format;
+import dev.odetab.numeric.OutOfRange;
+import dev.odetab.numeric.Rational;
+import dev.odetab.numeric.RoundingMode;
+import dev.odetab.ode.FunctionDef;
+import dev.odetab.ode.family.Catalog;
+import dev.odetab.tables.Column;
+import dev.odetab.tables.Grid;
+import dev.odetab.tables.TableDef;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeSet;
+import org.tomlj.TomlArray;
+import org.tomlj.TomlPosition;
+import org.tomlj.TomlTable;
+
+/** Reading and validating the {@code [tables.*]} part of a spec (DESIGN.md "Spec file"). */
+final class SpecTables {
+    static final Set<String> TABLE_KEYS = new LinkedHashSet<>(List.of("function", "kind", "grid", "points", "columns",
+            "format", "rounding", "out_of_range", "precision_cap_bits", "outputs"));
+    static final Set<String> GRID_KEYS = new LinkedHashSet<>(List.of("from", "to", "step"));
+    static final Set<String> KINDS = new LinkedHashSet<>(List.of("values", "zeros", "quadrature", "taylor"));
+    static final Set<String> BUILT_IN_OUTPUTS = new LinkedHashSet<>(List.of("csv", "c", "java"));
+    static final int MAX_POINTS = 10_000_000;
+    static final int DEFAULT_CAP_BITS = 4096;
+    static final int MAX_CAP_BITS = 1 << 20;
+
+    private final SpecFile spec;
+    private final TomlTable root;
+    private final Path specDir;
+
+    SpecTables(SpecFile spec, TomlTable root, Path specDir) {
+        this.spec = spec;
+        this.root = root;
+        this.specDir = specDir;
+    }
+
+    List<TableDef> all() throws InputError {
+        List<TableDef> r = new ArrayList<>();
+        TomlTable tables = root.getTable("tables");
+        if (tables == null) {
+            return r;
+        }
+        for (String name : tables.keySet()) {
+            r.add(table(name));
+        }
+        return r;
+    }
+
+    private TableDef table(String name) throws InputError {
+        List<String> base = List.of("tables", name);
+        if (!name.matches("[A-Za-z][A-Za-z0-9_]*")) {
+            throw spec.error(base, "table name '" + name + "' must start with a letter and hold only letters, digits and '_' (it names files and identifiers)");
+        }
+        TomlTable t = root.getTable(base);
+        if (t == null) {
+            throw spec.error(base, "tables." + name + " must be a table ([tables." + name + "])");
+        }
+        for (String key : t.keySet()) {
+            if (!TABLE_KEYS.contains(key)) {
+                throw spec.error(child(base, key), "unknown key '" + key + "'" + Suggestions.hint(key, TABLE_KEYS)
+                        + " (a table has: " + String.join(", ", TABLE_KEYS) + ")");
+            }
+        }
+        String kind = t.contains("kind") ? string(base, t, "kind") : "values";
+        if (!KINDS.contains(kind)) {
+            throw spec.error(child(base, "kind"), "unknown kind '" + kind + "'" + Suggestions.hint(kind, KINDS)
+                    + " (kinds: " + String.join(", ", KINDS) + ")");
+        }
+        if (!kind.equals("values")) {
+            throw spec.error(child(base, "kind"), "kind '" + kind + "' is not available in this version of odetab (available: values)");
+        }
+        if (!t.contains("function")) {
+            throw spec.error(base, "table '" + name + "' needs 'function' (a name from [functions] or a built-in family without parameters)");
+        }
+        String fname = string(base, t, "function");
+        FunctionDef f = function(child(base, "function"), fname);
+        Grid grid = grid(base, t);
+        List<Column> columns = columns(base, t);
+        Format format = Format.BinaryFormat.BINARY64;
+        if (t.contains("format")) {
+            String text = string(base, t, "format");
+            try {
+                format = Format.parse(text);
+            } catch (IllegalArgumentException e) {
+                throw spec.error(child(base, "format"), e.getMessage());
+            }
+        }
+        RoundingMode rounding = RoundingMode.NEAREST_EVEN;
+        if (t.contains("rounding")) {
+            try {
+                rounding = RoundingMode.parse(string(base, t, "rounding"));
+            } catch (IllegalArgumentException e) {
+                throw spec.error(child(base, "rounding"), e.getMessage());
+            }
+        }
+        OutOfRange outOfRange = OutOfRange.ERROR;
+        if (t.contains("out_of_range")) {
+            String text = string(base, t, "out_of_range");
+            if (!(format instanceof Format.FixedFormat)) {
+                throw spec.error(child(base, "out_of_range"), "out_of_range applies to fixed-point formats only, and this table's format is " + format.name());
+            }
+            switch (text) {
+                case "error" -> outOfRange = OutOfRange.ERROR;
+                case "saturate" -> outOfRange = OutOfRange.SATURATE;
+                default -> throw spec.error(child(base, "out_of_range"), "out_of_range must be \"error\" or \"saturate\", got \"" + text + "\"");
+            }
+        }
+        int cap = DEFAULT_CAP_BITS;
+        if (t.contains("precision_cap_bits")) {
+            Object v = t.get(List.of("precision_cap_bits"));
+            if (!(v instanceof Long l) || l < 64 || l > MAX_CAP_BITS) {
+                throw spec.error(child(base, "precision_cap_bits"), "precision_cap_bits must be an integer from 64 to " + MAX_CAP_BITS);
+            }
+            cap = (int) (long) l;
+        }
+        List<String> outputs = outputs(base, t);
+        return new TableDef(name, fname, f, grid, columns, format, rounding, outOfRange, cap, outputs);
+    }
+
+    private FunctionDef function(List<String> key, String fname) throws InputError {
+        if (spec.functionNames().contains(fname)) {
+            return spec.function(fname);
+        }
+        var family = Catalog.lookup(fname);
+        if (family.isPresent() && family.get().parameters().isEmpty()) {
+            try {
+                return family.get().define(Map.of());
+            } catch (dev.odetab.ode.family.ParameterException e) {
+                throw spec.error(key, e.getMessage());
+            }
+        }
+        Set<String> known = new TreeSet<>(spec.functionNames());
+        throw spec.error(key, "unknown function '" + fname + "'" + Suggestions.hint(fname, known)
+                + (known.isEmpty() ? " (the spec defines no [functions])" : " (defined: " + String.join(", ", spec.functionNames()) + ")")
+                + (family.isPresent() ? "; the family " + fname + " takes parameters: define it under [functions]" : ""));
+    }
+
+    private Grid grid(List<String> base, TomlTable t) throws InputError {
+        boolean hasGrid = t.contains("grid");
+        boolean hasPoints = t.contains("points");
+        if (hasGrid == hasPoints) {
+            throw spec.error(base, hasGrid ? "give either 'grid' or 'points', not both" : "a values table needs 'grid' or 'points'");
+        }
+        if (hasPoints) {
+            TomlArray arr = t.getArray(List.of("points"));
+            if (arr == null || arr.size() == 0) {
+                throw spec.error(child(base, "points"), "'points' must be a non-empty array of exact numbers as strings (\"0.1\", \"1/3\")");
+            }
+            List<Rational> pts = new ArrayList<>();
+            for (int i = 0; i < arr.size(); i++) {
+                pts.add(exact(arr, i, child(base, "points")));
+            }
+            return new Grid.Points(pts);
+        }
+        List<String> gk = child(base, "grid");
+        if (!t.isTable(List.of("grid"))) {
+            throw spec.error(gk, "'grid' must be an inline table { from = \"…\", to = \"…\", step = \"…\" }");
+        }
+        TomlTable g = t.getTable(List.of("grid"));
+        for (String key : g.keySet()) {
+            if (!GRID_KEYS.contains(key)) {
+                throw spec.error(child(gk, key), "unknown key '" + key + "' in grid" + Suggestions.hint(key, GRID_KEYS) + " (a grid has: from, to, step)");
+            }
+        }
+        for (String key : GRID_KEYS) {
+            if (!g.contains(key)) {
+                throw spec.error(gk, "the grid needs '" + key + "'");
+            }
+        }
+        Rational from = exactValue(child(gk, "from"), g.get(List.of("from")));
+        Rational to = exactValue(child(gk, "to"), g.get(List.of("to")));
+        Rational step = exactValue(child(gk, "step"), g.get(List.of("step")));
+        if (step.signum() == 0 || (to.compareTo(from) != 0 && step.signum() != to.subtract(from).signum())) {
+            throw spec.error(child(gk, "step"), "the step " + step.toDecimalOrFraction() + " does not lead from "
+                    + from.toDecimalOrFraction() + " to " + to.toDecimalOrFraction());
+        }
+        Rational count = to.subtract(from).divide(step);
+        if (!count.isInteger()) {
+            throw spec.error(child(gk, "step"), "the step " + step.toDecimalOrFraction() + " does not divide the range from "
+                    + from.toDecimalOrFraction() + " to " + to.toDecimalOrFraction() + " (" + count.toDecimalOrFraction() + " steps)");
+        }
+        if (count.compareTo(Rational.of(MAX_POINTS - 1)) > 0) {
+            throw spec.error(child(gk, "step"), "the grid has " + count.add(Rational.ONE) + " points; at most " + MAX_POINTS + " are allowed");
+        }
+        return new Grid.Uniform(from, to, step);
+    }
+
+    private Rational exact(TomlArray arr, int i, List<String> key) throws InputError {
+        Object v = arr.get(i);
+        TomlPosition p = arr.inputPositionOf(i);
+        String where = spec.display() + ":" + p.line() + ":" + p.column();
+        if (v instanceof Long l) {
+            return Rational.of(l);
+        }
+        if (!(v instanceof String s)) {
+            throw new InputError(where, v instanceof Double
+                    ? "write the point as a string (\"0.1\") so that it stays exact; TOML floats are binary"
+                    : "a point must be an exact number written as a string (\"0.1\", \"1/3\")");
+        }
+        try {
+            return Rational.parse(s);
+        } catch (NumberFormatException e) {
+            throw new InputError(where, e.getMessage());
+        }
+    }
+
+    private Rational exactValue(List<String> key, Object v) throws InputError {
+        if (v instanceof Long l) {
+            return Rational.of(l);
+        }
+        if (v instanceof Double) {
+            throw spec.error(key, "write the number as a string (\"0.1\") so that it stays exact; TOML floats are binary");
+        }
+        if (!(v instanceof String s)) {
+            throw spec.error(key, "expected an exact number written as a string (\"-10\", \"1/64\")");
+        }
+        ConstExpr e = spec.constant(key, s);
+        return e.exact().orElseThrow(() -> spec.error(key, "'" + s + "' is not an exact rational; grid points must be exact"));
+    }
+
+    private List<Column> columns(List<String> base, TomlTable t) throws InputError {
+        if (!t.contains("columns")) {
+            return List.of(Column.parse("x"), Column.parse("value"));
+        }
+        TomlArray arr = t.getArray(List.of("columns"));
+        if (arr == null || arr.size() == 0) {
+            throw spec.error(child(base, "columns"), "'columns' must be a non-empty array of column names");
+        }
+        List<Column> r = new ArrayList<>();
+        Set<String> seen = new LinkedHashSet<>();
+        for (int i = 0; i < arr.size(); i++) {
+            Object v = arr.get(i);
+            TomlPosition p = arr.inputPositionOf(i);
+            String where = spec.display() + ":" + p.line() + ":" + p.column();
+            Column c = v instanceof String s ? Column.parse(s) : null;
+            if (c == null) {
+                String given = String.valueOf(v);
+                throw new InputError(where, "column '" + given + "' is not available in a values table"
+                        + Suggestions.hint(given, List.of("x", "value", "derivative"))
+                        + " (available: x, value, derivative, derivative2 … derivative" + Column.MAX_DERIVATIVE + ")");
+            }
+            if (!seen.add(c.name())) {
+                throw new InputError(where, "column '" + c.name() + "' appears twice");
+            }
+            r.add(c);
+        }
+        return r;
+    }
+
+    private List<String> outputs(List<String> base, TomlTable t) throws InputError {
+        if (!t.contains("outputs")) {
+            return List.of("csv");
+        }
+        TomlArray arr = t.getArray(List.of("outputs"));
+        if (arr == null || arr.size() == 0) {
+            throw spec.error(child(base, "outputs"), "'outputs' must be a non-empty array of template names (csv, c, java) or .ftl paths");
+        }
+        List<String> r = new ArrayList<>();
+        for (int i = 0; i < arr.size(); i++) {
+            Object v = arr.get(i);
+            TomlPosition p = arr.inputPositionOf(i);
+            String where = spec.display() + ":" + p.line() + ":" + p.column();
+            if (!(v instanceof String s)) {
+                throw new InputError(where, "an output must be a template name (csv, c, java) or a path to a .ftl file");
+            }
+            if (BUILT_IN_OUTPUTS.contains(s)) {
+                r.add(s);
+            } else if (s.endsWith(".ftl")) {
+                Path tp = specDir.resolve(s).normalize();
+                if (!Files.isRegularFile(tp)) {
+                    throw new InputError(where, "template file '" + s + "' does not exist (looked for " + tp + ")");
+                }
+                r.add(tp.toString());
+            } else {
+                throw new InputError(where, "unknown template '" + s + "'" + Suggestions.hint(s, BUILT_IN_OUTPUTS)
+                        + " (built-in: csv, c, java; or a path to a .ftl file)");
+            }
+        }
+        return r;
+    }
+
+    private String string(List<String> base, TomlTable t, String key) throws InputError {
+        Object v = t.get(List.of(key));
+        if (!(v instanceof String s)) {
+            throw spec.error(child(base, key), "'" + key + "' must be a string");
+        }
+        return s;
+    }
+
+    private static List<String> child(List<String> base, String key) {
+        List<String> r = new ArrayList<>(base);
+        r.add(key);
+        return r;
+    }
+}

@@ -1,0 +1,29 @@
+package dev.odetab.tables;
+
+import dev.odetab.numeric.Format;
+import dev.odetab.numeric.OutOfRange;
+import dev.odetab.numeric.RoundingMode;
+import dev.odetab.ode.FunctionDef;
+import java.util.List;
+
+/**
+ * One table of a spec, validated.
+ *
+ * @param name the table's name (file names derive from it)
+ * @param functionName the function as the spec names it
+ * @param function the function
+ * @param grid the points
+ * @param columns the columns, in order
+ * @param format the entries' format
+ * @param rounding the rounding mode
+ * @param outOfRange the fixed-point policy
+ * @param capBits the precision cap of the precision loop
+ * @param outputs template names or paths, in order
+ */
+public record TableDef(String name, String functionName, FunctionDef function, Grid grid, List<Column> columns,
+        Format format, RoundingMode rounding, OutOfRange outOfRange, int capBits, List<String> outputs) {
+    public TableDef {
+        columns = List.copyOf(columns);
+        outputs = List.copyOf(outputs);
+    }
+}

@@ -1,0 +1,28 @@
+package dev.odetab.tables;
+
+import dev.odetab.numeric.Entry;
+import dev.odetab.numeric.Rational;
+import java.math.BigDecimal;
+import java.util.List;
+
+/**
+ * The evaluated table: one row per grid point, one correctly rounded entry per column.
+ *
+ * @param table the definition
+ * @param rows the rows in grid order
+ * @param maxRelativeRadius the largest relative radius of a deciding enclosure (the proven
+ *     error before rounding, relative to the value; zero when every entry was exact)
+ * @param maxPrecBits the highest working precision any entry needed
+ */
+public record TableResult(TableDef table, List<Row> rows, BigDecimal maxRelativeRadius, int maxPrecBits) {
+    /** One grid point: its exact abscissa and the entries in column order. */
+    public record Row(Rational x, List<Entry> entries) {
+        public Row {
+            entries = List.copyOf(entries);
+        }
+    }
+
+    public TableResult {
+        rows = List.copyOf(rows);
+    }
+}
