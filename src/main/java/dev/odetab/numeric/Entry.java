@@ -1,0 +1,270 @@
+package dev.odetab.numeric;
+
+import dev.odetab.numeric.Format.BinaryFormat;
+import dev.odetab.numeric.Format.DecimalFormat;
+import dev.odetab.numeric.Format.DoubleDouble;
+import dev.odetab.numeric.Format.FixedFormat;
+import java.math.BigDecimal;
+import java.math.BigInteger;
+import java.math.MathContext;
+import java.util.Objects;
+
+/**
+ * One correctly rounded table entry, as made by {@link Rounding#round}.
+ *
+ * <p>Trust level: Exact. The entry is its exact value plus what the value alone cannot say:
+ * the sign of a zero or an infinity, and whether a fixed-point value was clamped.
+ *
+ * @param format   the format the entry belongs to
+ * @param kind     what sort of entry it is
+ * @param negative the sign bit: the sign of the value, or of the zero or infinity; for
+ *                 SATURATED and OUT_OF_RANGE fixed-point entries, whether the exact value
+ *                 lay below the range
+ * @param value    the exact value; null exactly when kind is INFINITE; for SATURATED and
+ *                 OUT_OF_RANGE the end of the range that was exceeded
+ * @param hi       double-double only: the binary64 head, else null
+ * @param lo       double-double only: the binary64 tail, else null
+ */
+public record Entry(Format format, Kind kind, boolean negative, Rational value, Entry hi, Entry lo) {
+    /** What sort of entry it is. */
+    public enum Kind {
+        /** A finite non-zero value of the format. */
+        FINITE,
+        /** Zero (signed in binary formats and double-double). */
+        ZERO,
+        /** ±infinity (binary formats and double-double). */
+        INFINITE,
+        /** Fixed point: the rounded value lay outside the range and was clamped to its end. */
+        SATURATED,
+        /** Fixed point: the rounded value lay outside the range; the caller reports an error. */
+        OUT_OF_RANGE
+    }
+
+    public Entry {
+        Objects.requireNonNull(format, "format");
+        Objects.requireNonNull(kind, "kind");
+        if ((value == null) != (kind == Kind.INFINITE)) {
+            throw new IllegalArgumentException("value must be null exactly for an infinite entry: " + kind);
+        }
+        if ((hi != null || lo != null) != (format instanceof DoubleDouble) || (hi == null) != (lo == null)) {
+            throw new IllegalArgumentException("hi and lo belong to double-double entries only");
+        }
+    }
+
+    /**
+     * Exact: the IEEE 754 interchange encoding sign | biased exponent | trailing significand
+     * (IEEE 754-2019 §3.4), as a non-negative integer of {@link BinaryFormat#encodingBits()}
+     * bits (binary128 included).
+     *
+     * @throws IllegalStateException when the format is not binary
+     */
+    public BigInteger bits() {
+        BinaryFormat f = binary("bits()");
+        int p = f.precisionBits();
+        BigInteger sign = negative ? BigInteger.ONE.shiftLeft(f.encodingBits() - 1) : BigInteger.ZERO;
+        if (kind == Kind.INFINITE) {
+            BigInteger allOnes = BigInteger.ONE.shiftLeft(f.exponentFieldBits()).subtract(BigInteger.ONE);
+            return sign.or(allOnes.shiftLeft(p - 1));
+        }
+        BigInteger[] nq = significandAndQuantum(f);
+        BigInteger n = nq[0];
+        int q = nq[1].intValueExact();
+        if (n.bitLength() < p) {
+            return sign.or(n); // zero or subnormal: biased exponent 0
+        }
+        BigInteger biased = BigInteger.valueOf(q + p - 1 + f.emax());
+        return sign.or(biased.shiftLeft(p - 1)).or(n.clearBit(p - 1));
+    }
+
+    /**
+     * Exact: a C99 hexadecimal floating constant (ISO/IEC 9899:1999 §6.4.4.2) whose value is
+     * exactly this entry, without a suffix. Normal values are written {@code 0x1.8p+1} (hidden
+     * bit 1, trailing hex zeros dropped, {@code 0x1p+0} when the fraction is zero); subnormals
+     * keep the encoding's leading 0 and the exponent emin, {@code 0x0.0000000000001p-1022},
+     * as C99 §7.19.6.1 {@code %a} output of glibc and {@link Double#toHexString} write them.
+     * The fraction has ceil((p − 1)/4) hex digits before trailing zeros are dropped. Zeros
+     * are {@code 0x0p+0} and {@code -0x0p+0}; infinities {@code INFINITY} and
+     * {@code -INFINITY}, the C99 §7.12 macro, which a template maps for other languages.
+     *
+     * @throws IllegalStateException when the format is not binary
+     */
+    public String hexLiteral() {
+        BinaryFormat f = binary("hexLiteral()");
+        String sign = negative ? "-" : "";
+        if (kind == Kind.INFINITE) {
+            return sign + "INFINITY";
+        }
+        if (kind == Kind.ZERO) {
+            return sign + "0x0p+0";
+        }
+        int p = f.precisionBits();
+        BigInteger[] nq = significandAndQuantum(f);
+        BigInteger n = nq[0];
+        boolean normal = n.bitLength() == p;
+        int exponent = normal ? nq[1].intValueExact() + p - 1 : f.emin();
+        int hexDigits = (p - 1 + 3) / 4;
+        BigInteger fraction = n.clearBit(p - 1).shiftLeft(4 * hexDigits - (p - 1));
+        StringBuilder digits = new StringBuilder(fraction.toString(16));
+        while (digits.length() < hexDigits) {
+            digits.insert(0, '0');
+        }
+        int end = digits.length();
+        while (end > 0 && digits.charAt(end - 1) == '0') {
+            end--;
+        }
+        digits.setLength(end);
+        return sign + "0x" + (normal ? "1" : "0") + (end > 0 ? "." + digits : "")
+                + "p" + (exponent < 0 ? "-" : "+") + Math.abs(exponent);
+    }
+
+    /**
+     * Exact: the shortest decimal that rounds (NEAREST_EVEN, IEEE 754-2019 §4.3.1) back to
+     * exactly this entry; among equally short ones, the one nearest the entry (ties between
+     * two such: the even last digit). Derived by exact rational arithmetic from the rounding
+     * interval of the entry: the points halfway to its neighbours (half the gap to the lower
+     * neighbour is a quarter ulp at a power of two above the smallest normal), included
+     * exactly when the significand is even, since ties go to even (§4.3.1); for the largest
+     * finite value the upper end Ω + ulp/2 rounds to infinity and is excluded. The largest
+     * decimal exponent k for which an integer multiple of 10^k lies in the interval gives the
+     * fewest digits (a candidate with a trailing zero would be one at k + 1).
+     *
+     * <p>Written like ECMA-262 Number::toString: plain when the leading digit's exponent E
+     * satisfies −6 &lt;= E &lt;= 20 ({@code 0.000001}, {@code 100}; {@code 1e-7} is not plain),
+     * else {@code d.ddde±E}. Zeros are {@code 0} and {@code -0}; infinities {@code Infinity}
+     * and {@code -Infinity}, as {@link Double#parseDouble} reads them.
+     *
+     * @throws IllegalStateException when the format is not binary
+     */
+    public String shortestDecimal() {
+        BinaryFormat f = binary("shortestDecimal()");
+        String sign = negative ? "-" : "";
+        if (kind == Kind.INFINITE) {
+            return sign + "Infinity";
+        }
+        if (kind == Kind.ZERO) {
+            return sign + "0";
+        }
+        BigInteger[] nq = significandAndQuantum(f);
+        BigInteger n = nq[0];
+        int q = nq[1].intValueExact();
+        Rational v = value.abs();
+        Rational ulp = Rational.TWO.pow(q);
+        boolean powerOfTwoStep = n.bitCount() == 1 && n.bitLength() == f.precisionBits()
+                && q > Rounding.quantumMin(f);
+        Rational low = v.subtract(powerOfTwoStep ? ulp.divide(Rational.of(4)) : ulp.divide(Rational.TWO));
+        Rational high = v.add(ulp.divide(Rational.TWO));
+        boolean closed = !n.testBit(0);
+        int k = decimalExponentAbove(high);
+        while (true) {
+            Rational scale = Rational.of(10).pow(k);
+            BigInteger mLow = ceilOf(low.divide(scale), !closed);
+            BigInteger mHigh = floorOf(high.divide(scale), !closed);
+            if (mLow.compareTo(mHigh) <= 0) {
+                BigInteger nearest = Rounding.roundMagnitude(v.divide(scale).numerator(),
+                        v.divide(scale).denominator(), false, RoundingMode.NEAREST_EVEN);
+                BigInteger m = nearest.max(mLow).min(mHigh);
+                return sign + scientificOrPlain(m, k);
+            }
+            k--;
+        }
+    }
+
+    /**
+     * Exact: the stored integer k of a fixed-point entry (two's-complement value, so
+     * {@code -32768} for the smallest {@code fixed:s16.15}); the entry's value is k · 2^-F.
+     * For SATURATED and OUT_OF_RANGE entries, the end of the range.
+     *
+     * @throws IllegalStateException when the format is not fixed point
+     */
+    public BigInteger fixedInteger() {
+        if (!(format instanceof FixedFormat f)) {
+            throw wrongFormat("fixedInteger()");
+        }
+        return value.multiply(Rational.TWO.pow(f.fractionBits())).numerator();
+    }
+
+    /**
+     * Exact: for {@code decimal:N}, the entry with exactly N significant digits as
+     * {@link DecimalDigits#format} writes it ({@code 0} for zero); for fixed point, the exact
+     * decoded value k · 2^-F as a plain decimal without trailing zeros (always finite: 2^-F
+     * is a terminating decimal).
+     *
+     * @throws IllegalStateException for binary and double-double formats
+     */
+    public String decimalText() {
+        if (format instanceof DecimalFormat d) {
+            return DecimalDigits.format(value.toBigDecimal(MathContext.UNLIMITED), d.digits());
+        }
+        if (format instanceof FixedFormat) {
+            return value.toDecimalOrFraction();
+        }
+        throw wrongFormat("decimalText()");
+    }
+
+    private BinaryFormat binary(String what) {
+        if (format instanceof BinaryFormat f) {
+            return f;
+        }
+        throw wrongFormat(what);
+    }
+
+    private IllegalStateException wrongFormat(String what) {
+        return new IllegalStateException(what + " is not defined for format " + format.name());
+    }
+
+    /** n and q with |value| = n · 2^q, q &gt;= emin − p + 1, and n &gt;= 2^(p−1) unless q is that minimum. */
+    private BigInteger[] significandAndQuantum(BinaryFormat f) {
+        if (value.isZero()) {
+            return new BigInteger[] {BigInteger.ZERO, BigInteger.valueOf(Rounding.quantumMin(f))};
+        }
+        Rational v = value.abs();
+        int q = Math.max(Rounding.floorLog2(v.numerator(), v.denominator()) - f.precisionBits() + 1,
+                Rounding.quantumMin(f));
+        Rational n = v.multiply(Rational.TWO.pow(-q));
+        if (!n.isInteger()) {
+            throw new IllegalStateException("not a value of " + f.name() + ": " + value);
+        }
+        return new BigInteger[] {n.numerator(), BigInteger.valueOf(q)};
+    }
+
+    /** The least k with 10^k &gt; x, for x &gt; 0 (a double estimate, then exact correction). */
+    private static int decimalExponentAbove(Rational x) {
+        int log2 = Rounding.floorLog2(x.numerator(), x.denominator());
+        int k = (int) Math.ceil((log2 + 1) * 0.30102999566398120);
+        while (Rational.of(10).pow(k).compareTo(x) <= 0) {
+            k++;
+        }
+        while (Rational.of(10).pow(k - 1).compareTo(x) > 0) {
+            k--;
+        }
+        return k;
+    }
+
+    /** The least integer &gt;= t, or &gt; t when {@code strict}. */
+    private static BigInteger ceilOf(Rational t, boolean strict) {
+        BigInteger fl = t.floor();
+        if (t.isInteger()) {
+            return strict ? fl.add(BigInteger.ONE) : fl;
+        }
+        return fl.add(BigInteger.ONE);
+    }
+
+    /** The greatest integer &lt;= t, or &lt; t when {@code strict}. */
+    private static BigInteger floorOf(Rational t, boolean strict) {
+        BigInteger fl = t.floor();
+        return t.isInteger() && strict ? fl.subtract(BigInteger.ONE) : fl;
+    }
+
+    private static String scientificOrPlain(BigInteger m, int k) {
+        String digits = m.toString();
+        int exponent = k + digits.length() - 1;
+        if (exponent >= -6 && exponent <= 20) {
+            return new BigDecimal(m, -k).toPlainString();
+        }
+        StringBuilder sb = new StringBuilder().append(digits.charAt(0));
+        if (digits.length() > 1) {
+            sb.append('.').append(digits, 1, digits.length());
+        }
+        return sb.append('e').append(exponent < 0 ? '-' : '+').append(Math.abs(exponent)).toString();
+    }
+}
