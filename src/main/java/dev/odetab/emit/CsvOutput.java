@@ -1,0 +1,66 @@
+package dev.odetab.emit;
+
+import com.univocity.parsers.csv.CsvWriter;
+import com.univocity.parsers.csv.CsvWriterSettings;
+import dev.odetab.numeric.Entry;
+import dev.odetab.numeric.Format;
+import dev.odetab.tables.Column;
+import dev.odetab.tables.TableResult;
+import java.io.StringWriter;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The CSV of a table (RFC 4180, header row, no comment lines, {@code \n} line ends as
+ * univocity writes them; DESIGN.md "Outputs"): one column per spec column, named exactly so,
+ * followed by its companion ({@code NAME_hex} for binary formats, {@code NAME_decoded} for
+ * fixed point, {@code NAME_hi_hex}/{@code NAME_lo_hex} for double-double). Grid points that
+ * are exact decimals are written exactly in the {@code x} column.
+ */
+final class CsvOutput {
+    private CsvOutput() {
+    }
+
+    static byte[] render(TableResult result) {
+        Format f = result.table().format();
+        List<Column> cols = result.table().columns();
+        List<String> header = new ArrayList<>();
+        for (Column c : cols) {
+            header.addAll(Literals.csvHeader(c.name(), f));
+        }
+        CsvWriterSettings settings = new CsvWriterSettings();
+        settings.getFormat().setLineSeparator("\n");
+        settings.getFormat().setDelimiter(',');
+        settings.getFormat().setQuote('"');
+        settings.setQuoteEscapingEnabled(true);
+        StringWriter out = new StringWriter();
+        CsvWriter w = new CsvWriter(out, settings);
+        w.writeHeaders(header);
+        for (TableResult.Row row : result.rows()) {
+            List<String> cells = new ArrayList<>();
+            for (int c = 0; c < cols.size(); c++) {
+                Entry e = row.entries().get(c);
+                List<String> parts = new ArrayList<>(Literals.csv(e));
+                if (cols.get(c).isPoint() && writesExactPoint(result)) {
+                    if (row.x().toBigDecimalExact() != null) {
+                        parts.set(0, row.x().toDecimalOrFraction());
+                    }
+                }
+                cells.addAll(parts);
+            }
+            w.writeRow(cells.toArray());
+        }
+        w.close();
+        return out.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8);
+    }
+
+    /**
+     * An exact decimal grid point is written as typed when the companion hex is its
+     * nearest-even rounding, so that the decimal still reads back to the same bits (binary
+     * formats, nearest-even); otherwise the x column is written like every other column.
+     */
+    private static boolean writesExactPoint(TableResult result) {
+        return result.table().format() instanceof Format.BinaryFormat
+                && result.table().rounding() == dev.odetab.numeric.RoundingMode.NEAREST_EVEN;
+    }
+}

@@ -1,0 +1,121 @@
+package dev.odetab.emit;
+
+import dev.odetab.numeric.Entry;
+import dev.odetab.numeric.Format;
+import dev.odetab.numeric.OutOfRange;
+import dev.odetab.numeric.Rational;
+import dev.odetab.numeric.Rounding;
+import dev.odetab.numeric.RoundingMode;
+import dev.odetab.tables.Column;
+import dev.odetab.tables.Grid;
+import dev.odetab.tables.TableResult;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+/**
+ * The data model every template receives (documented in DEVELOPERS.md): plain maps, lists and
+ * strings only, every literal already formatted.
+ */
+final class EmitModel {
+    private EmitModel() {
+    }
+
+    static Map<String, Object> of(TableResult result, Provenance provenance, String specTitle) {
+        var t = result.table();
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("tool", Map.of("version", provenance.toolVersion()));
+        Map<String, Object> spec = new LinkedHashMap<>();
+        spec.put("path", provenance.specPath());
+        spec.put("sha256", provenance.specSha256());
+        spec.put("title", specTitle);
+        m.put("spec", spec);
+        Map<String, Object> table = new LinkedHashMap<>();
+        table.put("name", t.name());
+        table.put("identifier", t.name().toLowerCase(Locale.ROOT));
+        table.put("macro", t.name().toUpperCase(Locale.ROOT));
+        table.put("className", className(t.name()));
+        table.put("length", Integer.toString(result.rows().size()));
+        table.put("format", t.format().name());
+        table.put("rounding", t.rounding().spelling());
+        table.put("function", t.functionName());
+        m.put("table", table);
+        m.put("provenance", provenance.lines());
+        m.put("grid", grid(t.grid()));
+        List<Map<String, Object>> columns = new ArrayList<>();
+        for (int c = 0; c < t.columns().size(); c++) {
+            Column col = t.columns().get(c);
+            List<Literals.Part> parts = Literals.parts(t.format());
+            for (int p = 0; p < parts.size(); p++) {
+                Literals.Part part = parts.get(p);
+                String name = col.name() + part.suffix();
+                List<String> cLits = new ArrayList<>(result.rows().size());
+                List<String> javaLits = new ArrayList<>(result.rows().size());
+                for (TableResult.Row row : result.rows()) {
+                    Entry e = row.entries().get(c);
+                    cLits.add(Literals.c(e, p));
+                    javaLits.add(Literals.java(e, p));
+                }
+                Map<String, Object> cm = new LinkedHashMap<>();
+                cm.put("name", name);
+                cm.put("macro", name.toUpperCase(Locale.ROOT));
+                cm.put("accessor", accessor(name));
+                cm.put("cType", part.cType());
+                cm.put("javaType", part.javaType());
+                cm.put("description", col.name() + ": " + part.description() + ", rounded " + t.rounding().spelling());
+                cm.put("c", cLits);
+                cm.put("java", javaLits);
+                columns.add(cm);
+            }
+        }
+        m.put("columns", columns);
+        return m;
+    }
+
+    private static Map<String, Object> grid(Grid g) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        if (g instanceof Grid.Uniform u) {
+            m.put("uniform", true);
+            m.put("from", constant(u.from()));
+            m.put("to", constant(u.to()));
+            m.put("step", constant(u.step()));
+        } else {
+            m.put("uniform", false);
+        }
+        m.put("description", g.describe());
+        return m;
+    }
+
+    /** A grid constant: its exact text and its binary64 nearest-even hex literal (and whether that is exact). */
+    private static Map<String, Object> constant(Rational r) {
+        Entry e = Rounding.round(r, Format.BinaryFormat.BINARY64, RoundingMode.NEAREST_EVEN, OutOfRange.ERROR);
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("exact", r.toDecimalOrFraction());
+        m.put("binary64", e.hexLiteral());
+        m.put("isExact", r.equals(e.value()));
+        return m;
+    }
+
+    /** {@code ai_fine} → {@code AiFine}. */
+    static String className(String name) {
+        StringBuilder sb = new StringBuilder();
+        boolean up = true;
+        for (char ch : name.toCharArray()) {
+            if (ch == '_') {
+                up = true;
+            } else {
+                sb.append(up ? Character.toUpperCase(ch) : ch);
+                up = false;
+            }
+        }
+        return sb.toString();
+    }
+
+    /** {@code value_hi} → {@code valueHi}. */
+    static String accessor(String name) {
+        String c = className(name);
+        return Character.toLowerCase(c.charAt(0)) + c.substring(1);
+    }
+}
