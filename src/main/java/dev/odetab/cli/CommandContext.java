@@ -13,6 +13,11 @@ final class CommandContext {
         args = List.copyOf(raw);
     }
 
+    /** The argument at a 1-based position, or null. */
+    static String at(int index) {
+        return index >= 1 && index <= args.size() ? args.get(index - 1) : null;
+    }
+
     /** 1-based position of the first argument equal to {@code text} at or after {@code from}, or 0. */
     static int indexOf(String text, int from) {
         for (int i = Math.max(0, from - 1); i < args.size(); i++) {

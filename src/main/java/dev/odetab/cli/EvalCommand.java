@@ -2,6 +2,10 @@ package dev.odetab.cli;
 
 import dev.odetab.expr.ExprException;
 import dev.odetab.numeric.DecimalDigits;
+import dev.odetab.numeric.Entry;
+import dev.odetab.numeric.Format;
+import dev.odetab.numeric.OutOfRange;
+import dev.odetab.numeric.RoundingMode;
 import dev.odetab.numeric.Precision;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.FunctionDef;
@@ -43,6 +47,18 @@ final class EvalCommand implements Callable<Integer> {
             description = "significant decimal digits, correctly rounded (default ${DEFAULT-VALUE})")
     int digits;
 
+    @Option(names = "--format", paramLabel = "FMT",
+            description = "print the entry as a table in this format holds it: binary16|binary32|binary64|binary128|double-double|decimal:N|fixed:sT.F|fixed:uT.F")
+    String format;
+
+    @Option(names = "--rounding", paramLabel = "MODE", defaultValue = "nearest-even",
+            description = "with --format: nearest-even (default), down, up, toward-zero")
+    String rounding;
+
+    @Option(names = "--out-of-range", paramLabel = "POLICY", defaultValue = "error",
+            description = "with a fixed-point --format: error (default) or saturate (the entry is flagged on stderr)")
+    String outOfRange;
+
     @Option(names = "--derivative", description = "print y'(x) instead of y(x)")
     boolean derivative;
 
@@ -66,6 +82,9 @@ final class EvalCommand implements Callable<Integer> {
                 int index = CommandContext.indexOf(p, from);
                 from = index + 1;
                 xs.add(Points.parse(p, index));
+            }
+            if (format != null) {
+                return printEntries(f, xs, out, err);
             }
             for (int i = 0; i < xs.size(); i++) {
                 FunctionEvaluator.Rounded r = FunctionEvaluator.digits(f, xs.get(i), derivative, digits, capBits);
@@ -95,6 +114,46 @@ final class EvalCommand implements Callable<Integer> {
         }
     }
 
+    private Integer printEntries(FunctionDef f, List<Rational> xs, PrintWriter out, PrintWriter err)
+            throws InputError, ExprException, PrecisionCapException {
+        Format fmt;
+        RoundingMode mode;
+        OutOfRange policy;
+        try {
+            fmt = Format.parse(format);
+        } catch (IllegalArgumentException e) {
+            throw new InputError(optionWhere("--format"), e.getMessage());
+        }
+        try {
+            mode = RoundingMode.parse(rounding);
+        } catch (IllegalArgumentException e) {
+            throw new InputError(optionWhere("--rounding"), e.getMessage());
+        }
+        switch (outOfRange) {
+            case "error" -> policy = OutOfRange.ERROR;
+            case "saturate" -> policy = OutOfRange.SATURATE;
+            default -> throw new InputError(optionWhere("--out-of-range"), "expected error or saturate, got '" + outOfRange + "'");
+        }
+        for (int i = 0; i < xs.size(); i++) {
+            FunctionEvaluator.Decided r = FunctionEvaluator.entry(f, xs.get(i), derivative, fmt, mode, policy, capBits);
+            Entry e = r.entry();
+            if (e.kind() == Entry.Kind.OUT_OF_RANGE) {
+                throw new InputError(InputError.argument(CommandContext.indexOf(points.get(i), 1), points.get(i), 1),
+                        "the value at x = " + points.get(i) + " lies outside the range of " + fmt.name()
+                                + " (use a wider format, or --out-of-range saturate)");
+            }
+            out.println(points.get(i) + "\t" + EntryText.of(e));
+            if (e.kind() == Entry.Kind.SATURATED) {
+                err.println("odetab: x = " + points.get(i) + ": saturated to the end of the range of " + fmt.name());
+            }
+            if (verbose) {
+                err.println("odetab: x = " + points.get(i) + ": " + (r.exact() ? "exact (a polynomial solution, evaluated in rational arithmetic)"
+                        : r.precBits() + " bits, " + r.attempts() + " attempt(s), " + r.steps() + " step(s), " + r.terms() + " terms"));
+            }
+        }
+        return Main.OK;
+    }
+
     private void checkOptions() throws InputError {
         if (capBits < 64 || capBits > MAX_CAP_BITS) {
             throw new InputError(optionWhere("--precision-cap-bits"),
@@ -103,6 +162,9 @@ final class EvalCommand implements Callable<Integer> {
         if (digits < 1) {
             throw new InputError(optionWhere("--digits"), "--digits must be at least 1, got " + digits);
         }
+        if (format != null && spec.commandLine().getParseResult().hasMatchedOption("--digits")) {
+            throw new InputError(optionWhere("--digits"), "give either --digits or --format, not both");
+        }
         int needed = Precision.bitsForDigits(digits) + 32;
         if (needed > capBits) {
             throw new InputError(optionWhere("--digits"), "--digits " + digits + " needs at least " + needed
@@ -110,8 +172,13 @@ final class EvalCommand implements Callable<Integer> {
         }
     }
 
+    /** The position of an option's value ({@code --format binary99} → the argument after the option). */
     private static String optionWhere(String option) {
         int i = CommandContext.indexOf(option, 1);
-        return i == 0 ? "command line" : InputError.argument(i, option, 1);
+        if (i == 0) {
+            return "command line";
+        }
+        String value = CommandContext.at(i + 1);
+        return value == null ? InputError.argument(i, option, 1) : InputError.argument(i + 1, value, 1);
     }
 }

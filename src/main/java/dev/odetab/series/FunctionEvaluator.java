@@ -3,13 +3,17 @@ package dev.odetab.series;
 import dev.odetab.expr.ExprException;
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.DecimalDigits;
+import dev.odetab.numeric.Entry;
+import dev.odetab.numeric.Format;
+import dev.odetab.numeric.OutOfRange;
+import dev.odetab.numeric.Rounding;
+import dev.odetab.numeric.RoundingMode;
 import dev.odetab.numeric.Precision;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.FunctionDef;
 import dev.odetab.expr.Poly;
 import java.math.BigDecimal;
 import java.math.MathContext;
-import java.math.RoundingMode;
 import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.ConcurrentHashMap;
@@ -86,6 +90,45 @@ public final class FunctionEvaluator {
         return new Enclosure(r.jet(), precBits, r.steps(), r.terms());
     }
 
+    /** A correctly rounded table entry and the work it took. */
+    public record Decided(Entry entry, int precBits, int attempts, int steps, int terms, boolean exact) {
+    }
+
+    /**
+     * y(x), or y'(x) when {@code derivative}, correctly rounded into {@code format} with the
+     * given mode (Ziv's loop; exact polynomials are rounded from their exact value).
+     *
+     * @throws PrecisionCapException when {@code capBits} is not enough to decide the rounding
+     */
+    public static Decided entry(FunctionDef f, Rational x, boolean derivative, Format format, RoundingMode mode,
+            OutOfRange policy, int capBits) throws ExprException, PrecisionCapException {
+        Optional<Rational> exact = exact(f, x, derivative);
+        if (exact.isPresent()) {
+            return new Decided(Rounding.round(exact.get(), format, mode, policy), 0, 0, 0, 0, true);
+        }
+        int needed = neededBits(format);
+        Enclosure[] last = new Enclosure[1];
+        PrecisionLoop.Outcome<Entry> out = PrecisionLoop.<Entry, ExprException>run(prec -> {
+            last[0] = enclose(f, x, prec);
+            return derivative ? last[0].jet().derivative() : last[0].jet().value();
+        }, b -> Rounding.decide(b, format, mode, policy), needed, Math.min(needed + 40, capBits), capBits);
+        return new Decided(out.result(), out.precBits(), out.attempts(), last[0].steps(), last[0].terms(), false);
+    }
+
+    /** The bits a format holds: where the precision loop starts (a heuristic). */
+    public static int neededBits(Format f) {
+        if (f instanceof Format.BinaryFormat b) {
+            return b.precisionBits();
+        }
+        if (f instanceof Format.DoubleDouble) {
+            return 107;
+        }
+        if (f instanceof Format.DecimalFormat d) {
+            return Precision.bitsForDigits(d.digits());
+        }
+        return ((Format.FixedFormat) f).totalBits();
+    }
+
     /**
      * y(x), or y'(x) when {@code derivative}, correctly rounded to {@code digits10} significant
      * digits (round half to even).
@@ -96,7 +139,7 @@ public final class FunctionEvaluator {
             throws ExprException, PrecisionCapException {
         Optional<Rational> exact = exact(f, x, derivative);
         if (exact.isPresent()) {
-            BigDecimal v = exact.get().toBigDecimal(new MathContext(digits10, RoundingMode.HALF_EVEN));
+            BigDecimal v = exact.get().toBigDecimal(new MathContext(digits10, java.math.RoundingMode.HALF_EVEN));
             return new Rounded(v, Ball.of(exact.get(), Precision.bitsForDigits(digits10)), 0, 0, 0, 0, true);
         }
         int needed = Precision.bitsForDigits(digits10);
