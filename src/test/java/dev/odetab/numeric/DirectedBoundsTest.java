@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.odetab.numeric.Entry.Kind;
 import dev.odetab.numeric.Format.BinaryFormat;
 import dev.odetab.numeric.Format.DoubleDouble;
+import dev.odetab.oracle.HexFloatReader;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -36,6 +37,11 @@ class DirectedBoundsTest {
                 if (nearest.kind() != Kind.INFINITE && nearest.kind() != Kind.OUT_OF_RANGE) {
                     assertTrue(atLeast(nearest, down.value() == null ? x : down.value())
                             && atMost(nearest, up.value() == null ? x : up.value()), w);
+                }
+                if (f == BinaryFormat.BINARY128 && nearest.kind() != Kind.INFINITE) {
+                    // C99 §6.4.4.2 read by the oracle's own reader; bits decoded by IEEE 754-2019 §3.4
+                    assertTrue(HexFloatReader.read(nearest.hexLiteral()).value().equals(nearest.value()), w);
+                    assertTrue(RoundingCases.decode(nearest.bits(), BinaryFormat.BINARY128).value().equals(nearest.value()), w);
                 }
                 if (f == BinaryFormat.BINARY128) {
                     for (RoundingMode m : RoundingCases.MODES) {
