@@ -33,13 +33,16 @@ public final class Rounding {
      * and a directed mode gives ±∞ when it rounds away from zero (UP for x &gt; 0, DOWN for
      * x &lt; 0), else ±Ω. A result of zero keeps the sign of x; exact 0 is +0 (§6.3).</li>
      * <li>{@code double-double}: hi = binary64 NEAREST_EVEN rounding of x, lo = binary64
-     * rounding in mode m of the exact difference x − hi; the entry is the exact sum hi + lo.
+     * rounding of the exact difference x − hi in mode m, where TOWARD_ZERO means DOWN for
+     * x &gt; 0 and UP for x &lt; 0 (toward zero from x, not from x − hi, whose sign may differ);
+     * the entry is the exact sum hi + lo.
      * Then |lo| &lt;= ulp(hi)/2 whenever ulp(hi) &gt;= 2^-1073 (ulp(hi)/2 is a binary64 number
      * and |x − hi| &lt;= ulp(hi)/2, rounding is monotone); when hi is below 2^-1021 its ulp is
      * 2^-1074 and a directed lo may be ±2^-1074 = ±ulp(hi). For a directed mode the entry is a
      * directed bound of x: DOWN gives lo &lt;= x − hi, so hi + lo &lt;= x; UP gives lo &gt;= x − hi,
-     * so hi + lo &gt;= x; TOWARD_ZERO gives |lo| &lt;= |x − hi| with lo of the sign of x − hi,
-     * and since hi and x have the same sign (or hi = 0), |hi + lo| &lt;= |x|. In NEAREST_EVEN,
+     * so hi + lo &gt;= x; TOWARD_ZERO, for x &gt; 0, is DOWN, so hi + lo &lt;= x, and since
+     * x − hi &gt; −hi, a binary64 number, monotonicity gives lo &gt;= −hi: 0 &lt;= hi + lo &lt;= x
+     * (symmetrically for x &lt; 0). In NEAREST_EVEN,
      * |x − (hi + lo)| &lt;= ulp(lo)/2. When the binary64 rounding of x overflows (|x| &gt;= Ω +
      * ulp(Ω)/2), hi is the binary64 rounding of x in mode m (±∞ or ±Ω, as above) and lo = +0.
      * The pair is the "double-word" of Muller et al., Handbook of Floating-Point Arithmetic,
@@ -139,7 +142,8 @@ public final class Rounding {
             Entry zero = roundBinary(Rational.ZERO, b64, m);
             return new Entry(dd, h.kind(), negative, h.value(), h, zero);
         }
-        Entry lo = roundBinary(x.subtract(hi.value()), b64, m);
+        RoundingMode loMode = m != RoundingMode.TOWARD_ZERO ? m : negative ? RoundingMode.UP : RoundingMode.DOWN;
+        Entry lo = roundBinary(x.subtract(hi.value()), b64, loMode);
         Rational sum = hi.value().add(lo.value());
         return new Entry(dd, sum.isZero() ? Kind.ZERO : Kind.FINITE, negative, sum, hi, lo);
     }
