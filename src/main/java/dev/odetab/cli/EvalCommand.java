@@ -87,7 +87,12 @@ final class EvalCommand implements Callable<Integer> {
                 return printEntries(f, xs, out, err);
             }
             for (int i = 0; i < xs.size(); i++) {
-                FunctionEvaluator.Rounded r = FunctionEvaluator.digits(f, xs.get(i), derivative, digits, capBits);
+                FunctionEvaluator.Rounded r;
+                try {
+                    r = FunctionEvaluator.digits(f, xs.get(i), derivative, digits, capBits);
+                } catch (PrecisionCapException e) {
+                    throw new PointLimit(points.get(i), e);
+                }
                 out.println(points.get(i) + "\t" + DecimalDigits.format(r.value(), digits));
                 if (verbose && r.exact()) {
                     err.println("odetab: x = " + points.get(i) + ": exact (a polynomial solution, evaluated in rational arithmetic)");
@@ -106,8 +111,9 @@ final class EvalCommand implements Callable<Integer> {
         } catch (SingularCrossingException e) {
             err.println("odetab: " + e.getMessage());
             return Main.BAD_INPUT;
-        } catch (PrecisionCapException e) {
-            err.println("odetab: " + e.getMessage());
+        } catch (PointLimit e) {
+            err.println("odetab: " + function + " at x = " + e.point + ": " + e.getCause().getMessage()
+                    + "; nothing is printed for this point (raise --precision-cap-bits)");
             return Main.NUMERICAL_LIMIT;
         } finally {
             out.flush();
@@ -115,7 +121,7 @@ final class EvalCommand implements Callable<Integer> {
     }
 
     private Integer printEntries(FunctionDef f, List<Rational> xs, PrintWriter out, PrintWriter err)
-            throws InputError, ExprException, PrecisionCapException {
+            throws InputError, ExprException, PointLimit {
         Format fmt;
         RoundingMode mode;
         OutOfRange policy;
@@ -135,7 +141,12 @@ final class EvalCommand implements Callable<Integer> {
             default -> throw new InputError(optionWhere("--out-of-range"), "expected error or saturate, got '" + outOfRange + "'");
         }
         for (int i = 0; i < xs.size(); i++) {
-            FunctionEvaluator.Decided r = FunctionEvaluator.entry(f, xs.get(i), derivative, fmt, mode, policy, capBits);
+            FunctionEvaluator.Decided r;
+            try {
+                r = FunctionEvaluator.entry(f, xs.get(i), derivative, fmt, mode, policy, capBits);
+            } catch (PrecisionCapException e) {
+                throw new PointLimit(points.get(i), e);
+            }
             Entry e = r.entry();
             if (e.kind() == Entry.Kind.OUT_OF_RANGE) {
                 throw new InputError(InputError.argument(CommandContext.indexOf(points.get(i), 1), points.get(i), 1),
@@ -154,6 +165,17 @@ final class EvalCommand implements Callable<Integer> {
         return Main.OK;
     }
 
+    /** The precision cap was reached at one point. */
+    static final class PointLimit extends Exception {
+        private static final long serialVersionUID = 1L;
+        final String point;
+
+        PointLimit(String point, PrecisionCapException cause) {
+            super(cause.getMessage(), cause);
+            this.point = point;
+        }
+    }
+
     private void checkOptions() throws InputError {
         if (capBits < 64 || capBits > MAX_CAP_BITS) {
             throw new InputError(optionWhere("--precision-cap-bits"),
@@ -166,7 +188,7 @@ final class EvalCommand implements Callable<Integer> {
             throw new InputError(optionWhere("--digits"), "give either --digits or --format, not both");
         }
         int needed = Precision.bitsForDigits(digits) + 32;
-        if (needed > capBits) {
+        if (format == null && needed > capBits) {
             throw new InputError(optionWhere("--digits"), "--digits " + digits + " needs at least " + needed
                     + " bits of working precision, above the precision cap of " + capBits + " bits (raise it with --precision-cap-bits)");
         }
