@@ -25,7 +25,7 @@ import org.tomlj.TomlTable;
 /** Reading and validating the {@code [tables.*]} part of a spec (DESIGN.md "Spec file"). */
 final class SpecTables {
     static final Set<String> TABLE_KEYS = new LinkedHashSet<>(List.of("function", "kind", "grid", "points", "columns",
-            "format", "rounding", "out_of_range", "precision_cap_bits", "outputs"));
+            "format", "rounding", "out_of_range", "precision_cap_bits", "outputs", "terms"));
     static final Set<String> GRID_KEYS = new LinkedHashSet<>(List.of("from", "to", "step"));
     static final Set<String> KINDS = new LinkedHashSet<>(List.of("values", "zeros", "quadrature", "taylor"));
     static final Set<String> BUILT_IN_OUTPUTS = new LinkedHashSet<>(List.of("csv", "c", "java"));
@@ -75,8 +75,21 @@ final class SpecTables {
             throw spec.error(child(base, "kind"), "unknown kind '" + kind + "'" + Suggestions.hint(kind, KINDS)
                     + " (kinds: " + String.join(", ", KINDS) + ")");
         }
-        if (!kind.equals("values")) {
-            throw spec.error(child(base, "kind"), "kind '" + kind + "' is not available in this version of odetab (available: values)");
+        if (!kind.equals("values") && !kind.equals("taylor")) {
+            throw spec.error(child(base, "kind"), "kind '" + kind + "' is not available in this version of odetab (available: values, taylor)");
+        }
+        int terms = 0;
+        if (kind.equals("taylor")) {
+            Object v = t.get(List.of("terms"));
+            if (v == null) {
+                throw spec.error(base, "a taylor table needs 'terms' (how many Taylor coefficients per center, 1 to " + Column.MAX_TAYLOR_TERMS + ")");
+            }
+            if (!(v instanceof Long l) || l < 1 || l > Column.MAX_TAYLOR_TERMS) {
+                throw spec.error(child(base, "terms"), "'terms' must be an integer from 1 to " + Column.MAX_TAYLOR_TERMS);
+            }
+            terms = (int) (long) l;
+        } else if (t.contains("terms")) {
+            throw spec.error(child(base, "terms"), "'terms' belongs to taylor tables (kind = \"taylor\")");
         }
         if (!t.contains("function")) {
             throw spec.error(base, "table '" + name + "' needs 'function' (a name from [functions] or a built-in family without parameters)");
@@ -84,7 +97,7 @@ final class SpecTables {
         String fname = string(base, t, "function");
         FunctionDef f = function(child(base, "function"), fname);
         Grid grid = grid(base, t);
-        List<Column> columns = columns(base, t);
+        List<Column> columns = columns(base, t, terms);
         Format format = Format.BinaryFormat.BINARY64;
         if (t.contains("format")) {
             String text = string(base, t, "format");
@@ -227,9 +240,9 @@ final class SpecTables {
         return e.exact().orElseThrow(() -> spec.error(key, "'" + s + "' is not an exact rational; grid points must be exact"));
     }
 
-    private List<Column> columns(List<String> base, TomlTable t) throws InputError {
+    private List<Column> columns(List<String> base, TomlTable t, int terms) throws InputError {
         if (!t.contains("columns")) {
-            return List.of(Column.parse("x"), Column.parse("value"));
+            return terms > 0 ? expand(List.of(Column.parse("x")), terms) : List.of(Column.parse("x"), Column.parse("value"));
         }
         TomlArray arr = t.getArray(List.of("columns"));
         if (arr == null || arr.size() == 0) {
@@ -242,6 +255,14 @@ final class SpecTables {
             TomlPosition p = arr.inputPositionOf(i);
             String where = spec.display() + ":" + p.line() + ":" + p.column();
             Column c = v instanceof String s ? Column.parse(s) : null;
+            if (terms > 0) {
+                c = "taylor".equals(v) ? new Column("taylor", 0, true) : "x".equals(v) ? Column.parse("x") : null;
+                if (c == null) {
+                    String given = String.valueOf(v);
+                    throw new InputError(where, "column '" + given + "' is not available in a taylor table"
+                            + Suggestions.hint(given, List.of("x", "taylor")) + " (available: x, taylor)");
+                }
+            }
             if (c == null) {
                 String given = String.valueOf(v);
                 throw new InputError(where, "column '" + given + "' is not available in a values table"
@@ -252,6 +273,26 @@ final class SpecTables {
                 throw new InputError(where, "column '" + c.name() + "' appears twice");
             }
             r.add(c);
+        }
+        return terms > 0 ? expand(r, terms) : r;
+    }
+
+    /** The spec's column {@code taylor} becomes taylor0 … taylor(terms−1). */
+    private static List<Column> expand(List<Column> cols, int terms) {
+        List<Column> r = new ArrayList<>();
+        for (Column c : cols) {
+            if (c.taylor()) {
+                for (int k = 0; k < terms; k++) {
+                    r.add(Column.taylor(k));
+                }
+            } else {
+                r.add(c);
+            }
+        }
+        if (r.stream().noneMatch(Column::taylor)) {
+            for (int k = 0; k < terms; k++) {
+                r.add(Column.taylor(k));
+            }
         }
         return r;
     }

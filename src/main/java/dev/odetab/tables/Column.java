@@ -1,15 +1,27 @@
 package dev.odetab.tables;
 
 /**
- * A column of a values table: the point {@code x}, the {@code value}, the {@code derivative},
- * or a higher derivative {@code derivativeK} (K = 2 … 9, from the Taylor coefficients at the
- * point: y^(K)(x) = K! c_K).
+ * A column of a table: the point {@code x}, the {@code value}, the {@code derivative}, a higher
+ * derivative {@code derivativeK} (K = 2 … 9, from the Taylor coefficients at the point:
+ * y^(K)(x) = K! c_K), or, in a {@code taylor} table, the Taylor coefficient {@code taylorK} = c_K
+ * at the point (the spec's column {@code taylor} expands to taylor0 … taylor(terms−1)).
  *
  * @param name the name in the spec and in the outputs
- * @param order −1 for x, 0 for the value, K for the K-th derivative
+ * @param order −1 for x, 0 for the value, K for the K-th derivative or coefficient
+ * @param taylor true for a Taylor coefficient c_K rather than the derivative K! c_K
  */
-public record Column(String name, int order) {
+public record Column(String name, int order, boolean taylor) {
     public static final int MAX_DERIVATIVE = 9;
+    public static final int MAX_TAYLOR_TERMS = 64;
+
+    public Column(String name, int order) {
+        this(name, order, false);
+    }
+
+    /** The Taylor coefficient c_k as a column. */
+    public static Column taylor(int k) {
+        return new Column("taylor" + k, k, true);
+    }
 
     public static Column parse(String name) {
         switch (name) {

@@ -67,6 +67,9 @@ public final class TableEvaluator {
                 for (int c = 0; c < cols.size(); c++) {
                     Column col = cols.get(c);
                     Rational v = col.isPoint() ? xs.get(i) : derivative(poly.get(), col.order()).evaluate(xs.get(i));
+                    if (col.taylor()) {
+                        v = v.divide(factorial(col.order()));
+                    }
                     entries[i][c] = checked(t, xs.get(i), col, Rounding.round(v, t.format(), t.rounding(), t.outOfRange()));
                 }
             }
@@ -98,7 +101,7 @@ public final class TableEvaluator {
                         if (derivs == null) {
                             derivs = derivatives(t.function(), xs.get(i), jets.get(k), maxOrder(cols), prec);
                         }
-                        Ball b = derivs[col.order()];
+                        Ball b = col.taylor() ? derivs[col.order()].divide(factorial(col.order()), prec) : derivs[col.order()];
                         Optional<Entry> e = Rounding.decide(b, t.format(), t.rounding(), t.outOfRange());
                         if (e.isEmpty()) {
                             decided = false;
@@ -140,6 +143,14 @@ public final class TableEvaluator {
             r = r.derivative();
         }
         return r;
+    }
+
+    private static Rational factorial(int k) {
+        Rational f = Rational.ONE;
+        for (int i = 2; i <= k; i++) {
+            f = f.multiply(i);
+        }
+        return f;
     }
 
     private static int maxOrder(List<Column> cols) {
