@@ -42,7 +42,7 @@ final class CsvOutput {
                 Entry e = row.entries().get(c);
                 List<String> parts = new ArrayList<>(Literals.csv(e));
                 if (cols.get(c).isPoint() && writesExactPoint(result)) {
-                    if (row.x().toBigDecimalExact() != null) {
+                    if (row.x() != null && row.x().toBigDecimalExact() != null) {
                         parts.set(0, row.x().toDecimalOrFraction());
                     }
                 }

@@ -283,6 +283,51 @@ public final class BallFunctions {
     // ------------------------------------------------------------------ log
 
     /**
+     * Rigorous: a ball containing cos(x) for every x in the ball, for |x| &lt;= 8 (enough for
+     * Chebyshev nodes, whose angles lie in [0, π]).
+     *
+     * <p>Method: the Maclaurin series cos x = Σ_{j&lt;N} (−1)^j x^(2j)/(2j)! summed in ball
+     * arithmetic (so the input radius is carried by the balls), plus the tail. With X &gt;= |x|
+     * and N chosen so that X² &lt; (2N+1)(2N+2), the tail is dominated by a geometric series:
+     * |Σ_{j&gt;=N} (−1)^j x^(2j)/(2j)!| &lt;= X^(2N)/(2N)! · 1/(1 − X²/((2N+1)(2N+2))),
+     * since each term is at most X²/((2j+1)(2j+2)) times the one before (DLMF 4.19.1).
+     *
+     * @throws ArithmeticException when the ball reaches beyond |x| = 8
+     */
+    public static Ball cos(Ball x, int precBits) {
+        BigDecimal bigX = x.absUpper();
+        if (bigX.compareTo(BigDecimal.valueOf(8)) > 0) {
+            throw new ArithmeticException("cos is implemented for |x| <= 8 only, got " + x);
+        }
+        int work = precBits + 20;
+        Ball x2 = x.square(work);
+        BigDecimal x2Up = Directed.mulUp(bigX, bigX);
+        BigDecimal tiny = BigDecimal.ONE.scaleByPowerOfTen(-Precision.digits10(work) - 2);
+        Ball sum = Ball.ONE;
+        Ball term = Ball.ONE;
+        BigDecimal termBound = BigDecimal.ONE;
+        int j = 0;
+        while (true) {
+            j++;
+            long den = (2L * j - 1) * (2L * j);
+            term = term.multiply(x2, work).divide(BigInteger.valueOf(den), work).negate();
+            termBound = Directed.divUp(Directed.mulUp(termBound, x2Up), BigDecimal.valueOf(den));
+            sum = sum.add(term, work);
+            long next = (2L * j + 1) * (2L * j + 2);
+            if (x2Up.compareTo(BigDecimal.valueOf(next)) < 0) {
+                // tail after the terms up to j: bound X^(2j+2)/(2j+2)! / (1 − X²/((2j+3)(2j+4)))
+                BigDecimal nextTerm = Directed.divUp(Directed.mulUp(termBound, x2Up), BigDecimal.valueOf(next));
+                long after = (2L * j + 3) * (2L * j + 4);
+                BigDecimal ratio = Directed.divUp(x2Up, BigDecimal.valueOf(after));
+                if (ratio.compareTo(BigDecimal.ONE) < 0 && nextTerm.compareTo(tiny) < 0) {
+                    BigDecimal tail = Directed.divUp(nextTerm, Directed.subDown(BigDecimal.ONE, ratio));
+                    return sum.addError(tail).round(precBits);
+                }
+            }
+        }
+    }
+
+    /**
      * Trust level: Rigorous. Encloses ln x for every x in the ball; relative radius about
      * 2^-precBits (absolute about 2^-precBits near x = 1 when the input is exact; relative
      * there too, because m − 1 is formed exactly).

@@ -109,6 +109,70 @@ public final class LocalSeries {
     }
 
     /**
+     * Balls containing y(alpha+t) and y'(alpha+t) for every t in a ball (an irrational point, such
+     * as a Chebyshev node, near the rational center alpha). Trust level: Rigorous. The Taylor
+     * coefficients c_m at alpha are computed as balls, the partial sums are evaluated at the ball
+     * t by Horner's rule in ball arithmetic, and the tail is bounded by {@link TailBound} with
+     * |t| &lt;= T, T an upper bound of the ball's modulus.
+     *
+     * @throws StepTooLongException when no admissible tail radius exceeds T within maxTerms
+     */
+    public static Result sum(Recurrence rec, Ball y0, Ball y1, Ball t, int maxTerms, int precBits) {
+        int order = rec.order();
+        BigDecimal absT = Directed.up(t.absUpper());
+        if (absT.signum() == 0) {
+            return new Result(new Jet(y0, y1), 0);
+        }
+        BigDecimal target = BigDecimal.ONE.scaleByPowerOfTen(-Precision.digits10(precBits) + 1);
+        java.util.List<Ball> c = new java.util.ArrayList<>();
+        c.add(y0);
+        c.add(y1);
+        java.util.List<BigDecimal> uBounds = new java.util.ArrayList<>();
+        uBounds.add(Directed.up(y0.absUpper()));
+        uBounds.add(Directed.mulUp(Directed.up(y1.absUpper()), absT));
+        BigDecimal power = absT;
+        int nextCheck = order + 2;
+        for (int m = 2; ; m++) {
+            if (m >= nextCheck) {
+                BigDecimal[] last = new BigDecimal[order];
+                for (int k = 0; k < order; k++) {
+                    int i = m - order + k;
+                    last[k] = i < 0 ? BigDecimal.ZERO : uBounds.get(i);
+                }
+                TailBound.Bounds tail = TailBound.after(rec, m, last, absT);
+                if (tail != null) {
+                    BigDecimal lastTerm = uBounds.get(m - 1);
+                    boolean small = tail.valueBound().compareTo(lastTerm.max(target).multiply(target)) <= 0
+                            || lastTerm.signum() == 0;
+                    if (small || m >= maxTerms) {
+                        Ball value = Ball.ZERO;
+                        Ball derivative = Ball.ZERO;
+                        for (int k = m - 1; k >= 0; k--) {
+                            value = value.multiply(t, precBits).add(c.get(k), precBits);
+                            if (k >= 1) {
+                                derivative = derivative.multiply(t, precBits).add(c.get(k).multiplyExact(BigInteger.valueOf(k)), precBits);
+                            }
+                        }
+                        return new Result(new Jet(value.addError(tail.valueBound()), derivative.addError(tail.derivativeBound())), m);
+                    }
+                } else if (m >= maxTerms) {
+                    throw new StepTooLongException("no tail bound for a step of radius " + absT + " from x = "
+                            + rec.center().toDecimalOrFraction() + " within " + maxTerms + " terms");
+                }
+                nextCheck = m + Math.max(4, m / 8);
+            }
+            Ball acc = Ball.ZERO;
+            for (int j = 1; j <= order && j <= m; j++) {
+                acc = acc.addExact(c.get(m - j).multiplyExact(rec.numerator(j, m)));
+            }
+            Ball cm = acc.divide(rec.denominator(m), precBits);
+            c.add(cm);
+            power = Directed.mulUp(power, absT);
+            uBounds.add(Directed.mulUp(Directed.up(cm.absUpper()), power));
+        }
+    }
+
+    /**
      * Balls containing the first {@code count} Taylor coefficients c_0 … c_(count−1) at the
      * recurrence's center of the solution with c_0 in y0 and c_1 in y1 (METHODS §1).
      */

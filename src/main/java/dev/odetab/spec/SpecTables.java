@@ -135,6 +135,14 @@ final class SpecTables {
             }
             cap = (int) (long) l;
         }
+        if (grid.hasIrrationalPoints()) {
+            for (Column c : columns) {
+                if (c.order() >= 2 || c.taylor()) {
+                    throw spec.error(child(base, "columns"), "column '" + c.name()
+                            + "' needs exact grid points; a Chebyshev grid has irrational nodes (available there: x, value, derivative)");
+                }
+            }
+        }
         List<String> outputs = outputs(base, t);
         return new TableDef(name, fname, f, grid, columns, format, rounding, outOfRange, cap, outputs);
     }
@@ -179,6 +187,9 @@ final class SpecTables {
             throw spec.error(gk, "'grid' must be an inline table { from = \"…\", to = \"…\", step = \"…\" }");
         }
         TomlTable g = t.getTable(List.of("grid"));
+        if (g.contains("chebyshev")) {
+            return chebyshev(gk, g);
+        }
         for (String key : g.keySet()) {
             if (!GRID_KEYS.contains(key)) {
                 throw spec.error(child(gk, key), "unknown key '" + key + "' in grid" + Suggestions.hint(key, GRID_KEYS) + " (a grid has: from, to, step)");
@@ -205,6 +216,39 @@ final class SpecTables {
             throw spec.error(child(gk, "step"), "the grid has " + count.add(Rational.ONE) + " points; at most " + MAX_POINTS + " are allowed");
         }
         return new Grid.Uniform(from, to, step);
+    }
+
+    static final Set<String> CHEBYSHEV_KEYS = new LinkedHashSet<>(List.of("chebyshev", "n", "from", "to"));
+    static final int MAX_NODES = 100_000;
+
+    private Grid chebyshev(List<String> gk, TomlTable g) throws InputError {
+        for (String key : g.keySet()) {
+            if (!CHEBYSHEV_KEYS.contains(key)) {
+                throw spec.error(child(gk, key), "unknown key '" + key + "' in a Chebyshev grid" + Suggestions.hint(key, CHEBYSHEV_KEYS)
+                        + " (it has: chebyshev, n, from, to)");
+            }
+        }
+        for (String key : CHEBYSHEV_KEYS) {
+            if (!g.contains(key)) {
+                throw spec.error(gk, "the Chebyshev grid needs '" + key + "'");
+            }
+        }
+        Object kindValue = g.get(List.of("chebyshev"));
+        int kind = "first".equals(kindValue) ? 1 : "second".equals(kindValue) ? 2 : 0;
+        if (kind == 0) {
+            throw spec.error(child(gk, "chebyshev"), "chebyshev must be \"first\" (zeros of T_n) or \"second\" (extrema, ends included)");
+        }
+        Object nValue = g.get(List.of("n"));
+        int min = kind == 1 ? 1 : 2;
+        if (!(nValue instanceof Long l) || l < min || l > MAX_NODES) {
+            throw spec.error(child(gk, "n"), "n must be an integer from " + min + " to " + MAX_NODES);
+        }
+        Rational from = exactValue(child(gk, "from"), g.get(List.of("from")));
+        Rational to = exactValue(child(gk, "to"), g.get(List.of("to")));
+        if (from.compareTo(to) >= 0) {
+            throw spec.error(child(gk, "to"), "the interval must have from < to");
+        }
+        return new Grid.Chebyshev(kind, (int) (long) (Long) nValue, from, to);
     }
 
     private Rational exact(TomlArray arr, int i, List<String> key) throws InputError {

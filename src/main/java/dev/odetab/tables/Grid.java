@@ -1,13 +1,40 @@
 package dev.odetab.tables;
 
+import dev.odetab.numeric.Ball;
+import dev.odetab.numeric.BallFunctions;
 import dev.odetab.numeric.Rational;
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
 
-/** The points of a table, exact rationals; a grid never goes through a binary double. */
+/** The points of a table; a grid never goes through a binary double. */
 public sealed interface Grid {
-    /** The points in table order. */
+    /**
+     * The points in table order, as exact rationals; for a grid with irrational points
+     * (Chebyshev nodes) a rational near each node, used as the center of the last series step.
+     */
     List<Rational> points();
+
+    /** Number of points. */
+    default int size() {
+        return points().size();
+    }
+
+    /** The exact point i, or null when it is irrational. */
+    default Rational exactPoint(int i) {
+        return points().get(i);
+    }
+
+    /** A ball containing point i (exact points give exact balls). */
+    default Ball node(int i, int precBits) {
+        return Ball.of(points().get(i), precBits);
+    }
+
+    /** True when some point is irrational: the table then holds the correctly rounded node. */
+    default boolean hasIrrationalPoints() {
+        return false;
+    }
 
     /** One line for provenance. */
     String describe();
@@ -33,6 +60,104 @@ public sealed interface Grid {
         public String describe() {
             return "from " + from.toDecimalOrFraction() + " to " + to.toDecimalOrFraction() + " step "
                     + step.toDecimalOrFraction() + " (" + count() + " points)";
+        }
+    }
+
+    /**
+     * Chebyshev nodes on [from, to], ascending: first kind x = m + h·cos((2k−1)π/(2n)),
+     * k = n … 1; second kind (extrema, endpoints included) x = m + h·cos(kπ/(n−1)),
+     * k = n−1 … 0; m = (from + to)/2, h = (to − from)/2. The cosine is rational exactly when
+     * the angle is a multiple of π/3 or π/2 (Niven's theorem: cos qπ rational for rational q
+     * only at 0, ±1/2, ±1); such nodes are exact, all others irrational and enclosed in balls.
+     */
+    record Chebyshev(int kind, int n, Rational from, Rational to) implements Grid {
+        /** The angle of point i as a rational multiple q of π (i counts from the left end). */
+        Rational angle(int i) {
+            int k = n - i;
+            return kind == 1 ? Rational.of(2L * k - 1, 2L * n) : Rational.of(k - 1, n - 1);
+        }
+
+        private static Rational rationalCos(Rational q) {
+            // q modulo 2, in [0, 2), onto the cases of Niven's theorem
+            Rational m2 = q.subtract(Rational.of(q.divide(Rational.TWO).floor()).multiply(Rational.TWO));
+            if (m2.equals(Rational.ZERO)) {
+                return Rational.ONE;
+            }
+            if (m2.equals(Rational.ONE)) {
+                return Rational.ONE.negate();
+            }
+            if (m2.equals(Rational.of(1, 2)) || m2.equals(Rational.of(3, 2))) {
+                return Rational.ZERO;
+            }
+            if (m2.equals(Rational.of(1, 3)) || m2.equals(Rational.of(5, 3))) {
+                return Rational.of(1, 2);
+            }
+            if (m2.equals(Rational.of(2, 3)) || m2.equals(Rational.of(4, 3))) {
+                return Rational.of(-1, 2);
+            }
+            return null;
+        }
+
+        private Rational mid() {
+            return from.add(to).divide(Rational.TWO);
+        }
+
+        private Rational half() {
+            return to.subtract(from).divide(Rational.TWO);
+        }
+
+        @Override
+        public int size() {
+            return n;
+        }
+
+        @Override
+        public Rational exactPoint(int i) {
+            Rational c = rationalCos(angle(i));
+            return c == null ? null : mid().add(half().multiply(c));
+        }
+
+        @Override
+        public Ball node(int i, int precBits) {
+            Rational exact = exactPoint(i);
+            if (exact != null) {
+                return Ball.of(exact, precBits);
+            }
+            Ball theta = BallFunctions.pi(precBits + 10).multiply(angle(i), precBits + 10);
+            Ball c = BallFunctions.cos(theta, precBits + 10);
+            return c.multiply(half(), precBits + 10).add(Ball.of(mid(), precBits + 10), precBits);
+        }
+
+        @Override
+        public List<Rational> points() {
+            List<Rational> r = new ArrayList<>(n);
+            for (int i = 0; i < n; i++) {
+                Rational exact = exactPoint(i);
+                if (exact != null) {
+                    r.add(exact);
+                } else {
+                    BigDecimal m = node(i, 128).mid().round(new MathContext(30));
+                    r.add(Rational.of(m));
+                }
+            }
+            return r;
+        }
+
+        @Override
+        public boolean hasIrrationalPoints() {
+            for (int i = 0; i < n; i++) {
+                if (exactPoint(i) == null) {
+                    return true;
+                }
+            }
+            return false;
+        }
+
+        @Override
+        public String describe() {
+            return "Chebyshev nodes of the " + (kind == 1 ? "first" : "second") + " kind, n = " + n + ", on ["
+                    + from.toDecimalOrFraction() + ", " + to.toDecimalOrFraction()
+                    + "] (irrational nodes: x holds each node correctly rounded)";
         }
     }
 

@@ -61,8 +61,10 @@ public final class TableEvaluator {
         BigDecimal maxRel = BigDecimal.ZERO;
         int maxPrec = 0;
         Optional<Poly> poly = FunctionEvaluator.polynomial(t.function());
-        if (poly.isPresent()) {
-            for (int i = 0; i < n; i++) {
+        Grid grid = t.grid();
+        List<Integer> pending = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            if (poly.isPresent() && grid.exactPoint(i) != null) {
                 entries[i] = new Entry[cols.size()];
                 for (int c = 0; c < cols.size(); c++) {
                     Column col = cols.get(c);
@@ -72,69 +74,83 @@ public final class TableEvaluator {
                     }
                     entries[i][c] = checked(t, xs.get(i), col, Rounding.round(v, t.format(), t.rounding(), t.outOfRange()));
                 }
-            }
-        } else {
-            List<Integer> pending = new ArrayList<>();
-            for (int i = 0; i < n; i++) {
+            } else {
                 pending.add(i);
             }
-            int prec = startBits(t.format());
-            while (!pending.isEmpty()) {
-                List<Rational> pts = new ArrayList<>();
-                for (int i : pending) {
-                    pts.add(xs.get(i));
-                }
-                List<Jet> jets = GridWalk.enclose(t.function(), pts, prec);
-                List<Integer> still = new ArrayList<>();
-                for (int k = 0; k < pending.size(); k++) {
-                    int i = pending.get(k);
-                    Entry[] row = new Entry[cols.size()];
-                    BigDecimal rowRel = BigDecimal.ZERO;
-                    boolean decided = true;
-                    Ball[] derivs = null;
-                    for (int c = 0; c < cols.size() && decided; c++) {
-                        Column col = cols.get(c);
-                        if (col.isPoint()) {
-                            row[c] = Rounding.round(xs.get(i), t.format(), t.rounding(), t.outOfRange());
-                            continue;
-                        }
-                        if (derivs == null) {
-                            derivs = derivatives(t.function(), xs.get(i), jets.get(k), maxOrder(cols), prec);
-                        }
-                        Ball b = col.taylor() ? derivs[col.order()].divide(factorial(col.order()), prec) : derivs[col.order()];
-                        Optional<Entry> e = Rounding.decide(b, t.format(), t.rounding(), t.outOfRange());
-                        if (e.isEmpty()) {
-                            decided = false;
-                        } else {
-                            row[c] = e.get();
-                            rowRel = rowRel.max(relative(b));
-                        }
-                    }
-                    if (decided) {
-                        for (int c = 0; c < cols.size(); c++) {
-                            row[c] = checked(t, xs.get(i), cols.get(c), row[c]);
-                        }
-                        entries[i] = row;
-                        maxRel = maxRel.max(rowRel);
-                        maxPrec = Math.max(maxPrec, prec);
+        }
+        int prec = startBits(t.format());
+        while (!pending.isEmpty()) {
+            List<Rational> pts = new ArrayList<>();
+            for (int i : pending) {
+                pts.add(xs.get(i));
+            }
+            List<Jet> jets = poly.isPresent() ? null : GridWalk.enclose(t.function(), pts, prec);
+            List<Integer> still = new ArrayList<>();
+            for (int k = 0; k < pending.size(); k++) {
+                int i = pending.get(k);
+                Ball node = grid.node(i, prec);
+                Jet jet = poly.isPresent() ? polynomialJet(poly.get(), node, prec)
+                        : grid.exactPoint(i) != null ? jets.get(k) : nodeJet(t.function(), xs.get(i), jets.get(k), node, prec);
+                Entry[] row = new Entry[cols.size()];
+                BigDecimal rowRel = BigDecimal.ZERO;
+                boolean decided = true;
+                Ball[] derivs = null;
+                for (int c = 0; c < cols.size() && decided; c++) {
+                    Column col = cols.get(c);
+                    Optional<Entry> e;
+                    Ball b;
+                    if (col.isPoint()) {
+                        b = node;
                     } else {
-                        still.add(i);
+                        if (derivs == null) {
+                            derivs = derivatives(t.function(), xs.get(i), jet, maxOrder(cols), prec);
+                        }
+                        b = col.taylor() ? derivs[col.order()].divide(factorial(col.order()), prec) : derivs[col.order()];
+                    }
+                    e = Rounding.decide(b, t.format(), t.rounding(), t.outOfRange());
+                    if (e.isEmpty()) {
+                        decided = false;
+                    } else {
+                        row[c] = e.get();
+                        rowRel = col.isPoint() ? rowRel : rowRel.max(relative(b));
                     }
                 }
-                pending = still;
-                if (!pending.isEmpty()) {
-                    if (prec >= t.capBits()) {
-                        throw new UndecidedException(undecidedMessage(t, xs, pending));
+                if (decided) {
+                    for (int c = 0; c < cols.size(); c++) {
+                        row[c] = checked(t, xs.get(i), cols.get(c), row[c]);
                     }
-                    prec = Math.min(t.capBits(), 2 * prec);
+                    entries[i] = row;
+                    maxRel = maxRel.max(rowRel);
+                    maxPrec = Math.max(maxPrec, prec);
+                } else {
+                    still.add(i);
                 }
+            }
+            pending = still;
+            if (!pending.isEmpty()) {
+                if (prec >= t.capBits()) {
+                    throw new UndecidedException(undecidedMessage(t, xs, pending));
+                }
+                prec = Math.min(t.capBits(), 2 * prec);
             }
         }
         List<TableResult.Row> rows = new ArrayList<>(n);
         for (int i = 0; i < n; i++) {
-            rows.add(new TableResult.Row(xs.get(i), Arrays.asList(entries[i])));
+            rows.add(new TableResult.Row(grid.exactPoint(i), Arrays.asList(entries[i])));
         }
         return new TableResult(t, rows, maxRel, maxPrec);
+    }
+
+    /** Value and slope of an exact polynomial over a ball (Horner in ball arithmetic). */
+    private static Jet polynomialJet(Poly p, Ball x, int precBits) {
+        return new Jet(p.evaluate(x, precBits), p.derivative().evaluate(x, precBits));
+    }
+
+    /** The jet at an irrational node from the jet at the rational center near it: one series step with a ball step. */
+    private static Jet nodeJet(FunctionDef f, Rational center, Jet atCenter, Ball node, int precBits) {
+        Ball t = node.subtract(Ball.of(center, precBits + 20), precBits + 20);
+        return LocalSeries.sum(new Recurrence(f.equation(), center), atCenter.value(), atCenter.derivative(), t,
+                4 * precBits + 2000, precBits).jet();
     }
 
     private static Poly derivative(Poly p, int order) {

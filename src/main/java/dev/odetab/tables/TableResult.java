@@ -15,7 +15,7 @@ import java.util.List;
  * @param maxPrecBits the highest working precision any entry needed
  */
 public record TableResult(TableDef table, List<Row> rows, BigDecimal maxRelativeRadius, int maxPrecBits) {
-    /** One grid point: its exact abscissa and the entries in column order. */
+    /** One grid point: its exact abscissa (null for an irrational node) and the entries in column order. */
     public record Row(Rational x, List<Entry> entries) {
         public Row {
             entries = List.copyOf(entries);
