@@ -82,6 +82,23 @@ class BallFunctionsTest {
     }
 
     @Test
+    void cosineContainsApfloatsValue() {
+        // apfloat 1.15.0 ApfloatMath.cos at 80 digits; the points include π-multiples built in ball arithmetic.
+        for (String xs : new String[] {"0", "1e-20", "0.5", "-1.25", "3", "7.9"}) {
+            for (int bits : new int[] {64, 300}) {
+                Ball b = BallFunctions.cos(Ball.exact(new BigDecimal(xs)), bits);
+                BigDecimal ref = new BigDecimal(ApfloatMath.cos(new Apfloat(new BigDecimal(xs), 100)).toString(true));
+                assertTrue(b.addError(new BigDecimal("1e-95")).contains(ref), "cos(" + xs + ") = " + ref + " not in " + b);
+                assertTrue(b.rad().compareTo(BigDecimal.ONE.scaleByPowerOfTen(-(int) (bits * 0.3) + 2)) < 0, "too wide: " + b);
+            }
+        }
+        // cos(π/3) = 1/2 (DLMF 4.16.1 table of special values) through a ball for π
+        Ball third = BallFunctions.cos(BallFunctions.pi(200).divide(Ball.exact(3), 200), 200);
+        assertTrue(third.contains(new BigDecimal("0.5")), third.toString());
+        assertThrows(ArithmeticException.class, () -> BallFunctions.cos(Ball.exact(9), 64));
+    }
+
+    @Test
     void piAtDifferentPrecisionsOverlaps() {
         assertTrue(BallFunctions.pi(64).overlaps(BallFunctions.pi(1000)));
         assertTrue(BallFunctions.pi(1000).rad().compareTo(BallFunctions.pi(64).rad()) < 0);
