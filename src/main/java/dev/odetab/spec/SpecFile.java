@@ -115,7 +115,8 @@ public final class SpecFile {
 
     /** Every table of the spec, validated; the first problem found is the error. */
     public List<TableDef> tables() throws InputError {
-        Path dir = path.toAbsolutePath().getParent();
+        // relative to the spec path as given, so that template paths in messages read as the user typed them
+        Path dir = path.getParent() == null ? Path.of("") : path.getParent();
         return new SpecTables(this, toml, dir).all();
     }
 
