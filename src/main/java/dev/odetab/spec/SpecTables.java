@@ -147,8 +147,11 @@ final class SpecTables {
     private Grid grid(List<String> base, TomlTable t) throws InputError {
         boolean hasGrid = t.contains("grid");
         boolean hasPoints = t.contains("points");
-        if (hasGrid == hasPoints) {
-            throw spec.error(base, hasGrid ? "give either 'grid' or 'points', not both" : "a values table needs 'grid' or 'points'");
+        if (hasGrid && hasPoints) {
+            throw spec.error(child(base, "points"), "give either 'grid' or 'points', not both");
+        }
+        if (!hasGrid && !hasPoints) {
+            throw spec.error(base, "a values table needs 'grid' or 'points'");
         }
         if (hasPoints) {
             TomlArray arr = t.getArray(List.of("points"));
