@@ -44,6 +44,21 @@ public final class BinaryInterchange {
         return encode(m.group(1).equals("-"), significand, exponent, literal);
     }
 
+    /** The exact value of a finite hex float literal. */
+    public static BigDecimal hexValue(String literal) {
+        Matcher m = HEX.matcher(literal);
+        if (!m.matches()) {
+            throw new IllegalArgumentException("not a hex float literal: " + literal);
+        }
+        String frac = m.group(3) == null ? "" : m.group(3);
+        String digits = m.group(2) + frac;
+        BigDecimal significand = new BigDecimal(new BigInteger(digits.isEmpty() ? "0" : digits, 16));
+        int exponent = Integer.parseInt(m.group(4)) - 4 * frac.length();
+        BigDecimal v = exponent >= 0 ? significand.multiply(new BigDecimal(BigInteger.TWO.pow(exponent)))
+                : significand.divide(new BigDecimal(BigInteger.TWO.pow(-exponent)));
+        return m.group(1).equals("-") ? v.negate() : v;
+    }
+
     /** The roundTiesToEven encoding of an exact decimal ("-0.1", "1e-3"); no overflow expected. */
     public BigInteger roundDecimal(String decimal) {
         BigDecimal d = new BigDecimal(decimal);
