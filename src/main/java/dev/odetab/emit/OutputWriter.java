@@ -2,9 +2,11 @@ package dev.odetab.emit;
 
 import java.io.IOException;
 import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.security.SecureRandom;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -16,6 +18,8 @@ import java.util.Map;
  * system has it). A build that fails before that leaves every existing file as it was.
  */
 public final class OutputWriter {
+    private static final SecureRandom RANDOM = new SecureRandom();
+
     private OutputWriter() {
     }
 
@@ -33,6 +37,22 @@ public final class OutputWriter {
         return diff;
     }
 
+    /**
+     * A new empty file {@code .odetab-N.tmp} in {@code dir}. Unlike {@link Files#createTempFile},
+     * which makes it readable by its owner only, it gets the permissions of any new file (the
+     * umask applies), which the output keeps after the rename.
+     */
+    private static Path createTemporary(Path dir) throws IOException {
+        while (true) {
+            Path tmp = dir.resolve(".odetab-" + Long.toUnsignedString(RANDOM.nextLong()) + ".tmp");
+            try {
+                return Files.createFile(tmp);
+            } catch (FileAlreadyExistsException e) {
+                // another name
+            }
+        }
+    }
+
     /** Writes every file into {@code dir} (created when missing). */
     public static void write(Path dir, Map<String, byte[]> files) throws IOException {
         Files.createDirectories(dir);
@@ -43,7 +63,7 @@ public final class OutputWriter {
                 if (!target.startsWith(dir.normalize())) {
                     throw new IOException("refusing to write outside the output folder: " + e.getKey());
                 }
-                Path tmp = Files.createTempFile(dir, ".odetab-", ".tmp");
+                Path tmp = createTemporary(dir);
                 moves.add(new Path[] {tmp, target});
                 Files.write(tmp, e.getValue());
             }

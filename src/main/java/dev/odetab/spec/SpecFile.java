@@ -23,6 +23,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
+import java.util.regex.Pattern;
 import org.tomlj.Toml;
 import org.tomlj.TomlParseError;
 import org.tomlj.TomlParseResult;
@@ -38,6 +39,7 @@ import org.tomlj.TomlTable;
 public final class SpecFile {
     static final Set<String> TOP_LEVEL_KEYS = Set.of("title", "functions", "tables");
     static final Set<String> EQUATION_KEYS = Set.of("equation", "at", "value", "slope");
+    private static final Pattern COLUMN_IN_TEXT = Pattern.compile("at column (\\d+)");
 
     private final Path path;
     private final String display;
@@ -115,7 +117,8 @@ public final class SpecFile {
 
     /** Every table of the spec, validated; the first problem found is the error. */
     public List<TableDef> tables() throws InputError {
-        Path dir = path.toAbsolutePath().getParent();
+        // relative to the spec path as given, so that template paths in messages read as the user typed them
+        Path dir = path.getParent() == null ? Path.of("") : path.getParent();
         return new SpecTables(this, toml, dir).all();
     }
 
@@ -281,8 +284,17 @@ public final class SpecFile {
             }
             if (i < text.length() && (text.charAt(i) == '"' || text.charAt(i) == '\'')) {
                 col = i + 1 + columnInString;
+                message = fileColumns(message, i + 1);
             }
         }
         return new InputError(display + ":" + line + ":" + col, message);
+    }
+
+    /**
+     * An expression message may name a second column of the parsed text ("the '(' at column
+     * 7"); beside the file position it must be a file column too.
+     */
+    private static String fileColumns(String message, int offset) {
+        return COLUMN_IN_TEXT.matcher(message).replaceAll(m -> "at column " + (Integer.parseInt(m.group(1)) + offset));
     }
 }

@@ -159,17 +159,25 @@ final class SpecTables {
                 throw spec.error(key, e.getMessage());
             }
         }
+        if (family.isPresent()) {
+            List<String> params = family.get().parameters().stream().map(p -> p.name()).toList();
+            throw spec.error(key, "the family " + fname + " takes parameters (" + String.join(", ", params)
+                    + "), so a table cannot name it directly: define a function under [functions] with family = \""
+                    + fname + "\" and its parameters, and name that function here");
+        }
         Set<String> known = new TreeSet<>(spec.functionNames());
         throw spec.error(key, "unknown function '" + fname + "'" + Suggestions.hint(fname, known)
-                + (known.isEmpty() ? " (the spec defines no [functions])" : " (defined: " + String.join(", ", spec.functionNames()) + ")")
-                + (family.isPresent() ? "; the family " + fname + " takes parameters: define it under [functions]" : ""));
+                + (known.isEmpty() ? " (the spec defines no [functions])" : " (defined: " + String.join(", ", spec.functionNames()) + ")"));
     }
 
     private Grid grid(List<String> base, TomlTable t) throws InputError {
         boolean hasGrid = t.contains("grid");
         boolean hasPoints = t.contains("points");
-        if (hasGrid == hasPoints) {
-            throw spec.error(base, hasGrid ? "give either 'grid' or 'points', not both" : "a values table needs 'grid' or 'points'");
+        if (hasGrid && hasPoints) {
+            throw spec.error(child(base, "points"), "give either 'grid' or 'points', not both");
+        }
+        if (!hasGrid && !hasPoints) {
+            throw spec.error(base, "a values table needs 'grid' or 'points'");
         }
         if (hasPoints) {
             TomlArray arr = t.getArray(List.of("points"));

@@ -1,0 +1,92 @@
+package dev.odetab.spec;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+
+import dev.odetab.cli.CliRunner;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeMap;
+import java.util.TreeSet;
+import java.util.stream.Collectors;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/**
+ * DESIGN.md "Spec file" and "Command line": a malformed spec is exit 2 with one message naming
+ * file, line and column, and {@code odetab build} writes nothing (the output folder is not even
+ * created). One file per fault under {@code specs/malformed/}.
+ */
+class MalformedSpecTest {
+    private static final String DIR = "src/test/resources/specs/malformed/";
+
+    /** File name → the message after {@code "odetab: "}, its position included. */
+    private static final Map<String, String> EXPECTED = new TreeMap<>(Map.ofEntries(
+            Map.entry("toml-syntax.toml", "3:45: TOML syntax: Unexpected end of line, expected }"),
+            Map.entry("unknown-top-level-key.toml",
+                    "2:1: unknown key 'tabels'; did you mean 'tables'? (allowed at the top: functions, tables, title)"),
+            Map.entry("unknown-table-key.toml", "4:1: unknown key 'fromat'; did you mean 'format'? (a table has: function, kind, "
+                    + "grid, points, columns, format, rounding, out_of_range, precision_cap_bits, outputs)"),
+            Map.entry("format-not-a-string.toml", "4:1: 'format' must be a string"),
+            Map.entry("step-does-not-divide.toml", "3:32: the step 0.375 does not divide the range from 0 to 1 (8/3 steps)"),
+            Map.entry("step-wrong-sign.toml", "3:33: the step 0.25 does not lead from 1 to -1"),
+            Map.entry("grid-and-points.toml", "4:1: give either 'grid' or 'points', not both"),
+            Map.entry("neither-grid-nor-points.toml", "1:1: a values table needs 'grid' or 'points'"),
+            Map.entry("point-is-toml-float.toml",
+                    "3:18: write the point as a string (\"0.1\") so that it stays exact; TOML floats are binary"),
+            Map.entry("unknown-column.toml",
+                    "4:12: column 'node' is not available in a values table (available: x, value, derivative, derivative2 … derivative9)"),
+            Map.entry("duplicate-column.toml", "4:26: column 'x' appears twice"),
+            Map.entry("unknown-format.toml", "4:1: unknown format 'binary80': expected a format name; formats: binary16, binary32, "
+                    + "binary64, binary128, double-double, decimal:N (1 <= N <= 10000), fixed:sT.F or fixed:uT.F "
+                    + "(T total bits, 2..64 signed or 1..64 unsigned; F fraction bits, 0..128)"),
+            Map.entry("unknown-rounding.toml", "4:1: unknown rounding mode 'nearest'; expected one of nearest-even, down, up, toward-zero"),
+            Map.entry("out-of-range-on-binary.toml",
+                    "5:1: out_of_range applies to fixed-point formats only, and this table's format is binary32"),
+            Map.entry("precision-cap-too-small.toml", "4:1: precision_cap_bits must be an integer from 64 to 1048576"),
+            Map.entry("unknown-template.toml",
+                    "4:19: unknown template 'jav'; did you mean 'java'? (built-in: csv, c, java; or a path to a .ftl file)"),
+            Map.entry("missing-template-file.toml", "4:19: template file 'no-such-dir/table.rs.ftl' does not exist (looked for "
+                    + DIR + "no-such-dir/table.rs.ftl)"),
+            Map.entry("unknown-function.toml", "7:1: unknown function 'wav'; did you mean 'wave'? (defined: wave)"),
+            Map.entry("family-needs-parameters.toml", "2:1: the family hermite-function takes parameters (n), so a table cannot "
+                    + "name it directly: define a function under [functions] with family = \"hermite-function\" and its parameters, "
+                    + "and name that function here"),
+            Map.entry("kind-zeros.toml", "2:1: kind 'zeros' is not available in this version of odetab (available: values)"),
+            Map.entry("singular-at.toml",
+                    "3:1: x = -1 is a singular point of the equation (its coefficient of y'' vanishes there); choose an ordinary point"),
+            Map.entry("bad-value-expression.toml", "3:18: expected ')' to close the '(' at column 16, found the end of the text"),
+            Map.entry("nonlinear-equation.toml", "2:20: the equation must be linear in y: a term in y cannot be raised to a power")));
+
+    static Stream<Arguments> specs() {
+        return EXPECTED.entrySet().stream().map(e -> Arguments.of(e.getKey(), e.getValue()));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("specs")
+    void exitTwoWithOneLocatedMessageAndNothingWritten(String file, String message, @TempDir Path tmp) {
+        Path out = tmp.resolve("out");
+        CliRunner.Result r = CliRunner.run("build", DIR + file, "--out", out.toString());
+        assertEquals("odetab: " + DIR + file + ":" + message + "\n", r.err());
+        assertEquals(2, r.code(), "exit code");
+        assertEquals("", r.out());
+        assertFalse(Files.exists(out), "the output folder must not be created");
+    }
+
+    @Test
+    void everyMalformedSpecHasItsExpectation() throws IOException {
+        Set<String> files;
+        try (Stream<Path> s = Files.list(Path.of(DIR))) {
+            files = s.map(p -> p.getFileName().toString()).collect(Collectors.toCollection(TreeSet::new));
+        }
+        assertEquals(EXPECTED.keySet(), files);
+        assertFalse(files.size() < 20, "at least 20 malformed specs");
+    }
+}

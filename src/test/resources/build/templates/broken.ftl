@@ -1,0 +1,3 @@
+// ${table.name}
+<#list columns as col>
+${col.name}
