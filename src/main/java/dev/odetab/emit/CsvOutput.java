@@ -15,7 +15,8 @@ import java.util.List;
  * univocity writes them; DESIGN.md "Outputs"): one column per spec column, named exactly so,
  * followed by its companion ({@code NAME_hex} for binary formats, {@code NAME_decoded} for
  * fixed point, {@code NAME_hi_hex}/{@code NAME_lo_hex} for double-double). Grid points that
- * are exact decimals are written exactly in the {@code x} column.
+ * are exact decimals are written exactly in the {@code x} column. A fixed-point table that
+ * saturates has a {@code NAME_flag} column after each value column: {@code saturated} or empty.
  */
 final class CsvOutput {
     private CsvOutput() {
@@ -25,8 +26,9 @@ final class CsvOutput {
         Format f = result.table().format();
         List<Column> cols = result.table().columns();
         List<String> header = new ArrayList<>();
+        boolean flags = f instanceof Format.FixedFormat && result.table().outOfRange() == dev.odetab.numeric.OutOfRange.SATURATE;
         for (Column c : cols) {
-            header.addAll(Literals.csvHeader(c.name(), f));
+            header.addAll(Literals.csvHeader(c.name(), f, flags && !c.isPoint()));
         }
         CsvWriterSettings settings = new CsvWriterSettings();
         settings.getFormat().setLineSeparator("\n");
@@ -40,7 +42,7 @@ final class CsvOutput {
             List<String> cells = new ArrayList<>();
             for (int c = 0; c < cols.size(); c++) {
                 Entry e = row.entries().get(c);
-                List<String> parts = new ArrayList<>(Literals.csv(e));
+                List<String> parts = new ArrayList<>(Literals.csv(e, flags && !cols.get(c).isPoint()));
                 if (cols.get(c).isPoint() && writesExactPoint(result)) {
                     if (row.x() != null && row.x().toBigDecimalExact() != null) {
                         parts.set(0, row.x().toDecimalOrFraction());

@@ -119,6 +119,18 @@ final class Literals {
         return bits <= 8 ? "byte" : bits <= 16 ? "short" : bits <= 32 ? "int" : "long";
     }
 
+    /**
+     * The CSV cells of an entry: the value and its companion cell (hex or decoded), per
+     * DESIGN.md "Outputs"; in a fixed-point table whose policy is to saturate, a third cell
+     * {@code NAME_flag} says {@code saturated} for a clamped entry and is empty otherwise.
+     */
+    static List<String> csv(Entry e, boolean flagColumn) {
+        if (flagColumn) {
+            return List.of(e.fixedInteger().toString(), e.decimalText(), e.kind() == Entry.Kind.SATURATED ? "saturated" : "");
+        }
+        return csv(e);
+    }
+
     /** The CSV cells of an entry: the value and its companion cell (hex or decoded), per DESIGN.md "Outputs". */
     static List<String> csv(Entry e) {
         Format f = e.format();
@@ -134,6 +146,11 @@ final class Literals {
             return List.of(e.decimalText());
         }
         return List.of(e.fixedInteger().toString(), e.decimalText());
+    }
+
+    /** The CSV header cells of a column, with the saturation flag column when asked. */
+    static List<String> csvHeader(String name, Format f, boolean flagColumn) {
+        return flagColumn ? List.of(name, name + "_decoded", name + "_flag") : csvHeader(name, f);
     }
 
     /** The CSV header cells of a column. */

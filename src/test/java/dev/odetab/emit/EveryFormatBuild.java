@@ -40,7 +40,7 @@ public final class EveryFormatBuild {
     }
 
     /** A table as the spec declares it. */
-    public record Table(String name, String format, List<String> columns) {
+    public record Table(String name, String format, List<String> columns, boolean saturates) {
         public boolean signedFixed() {
             return format.startsWith("fixed:s");
         }
@@ -84,7 +84,7 @@ public final class EveryFormatBuild {
                 for (int i = 0; i < cols.size(); i++) {
                     columns.add(cols.getString(i));
                 }
-                r.add(new Table(name, t.getString("format"), columns));
+                r.add(new Table(name, t.getString("format"), columns, "saturate".equals(t.getString("out_of_range"))));
             }
             return r;
         } catch (IOException e) {
