@@ -94,23 +94,13 @@ final class EvalCommand implements Callable<Integer> {
                     throw new PointLimit(points.get(i), e);
                 }
                 out.println(points.get(i) + "\t" + DecimalDigits.format(r.value(), digits));
-                if (verbose && r.exact()) {
-                    err.println("odetab: x = " + points.get(i) + ": exact (a polynomial solution, evaluated in rational arithmetic)");
-                } else if (verbose) {
-                    err.println("odetab: x = " + points.get(i) + ": " + r.precBits() + " bits, " + r.attempts() + " attempt(s), "
-                            + r.steps() + " step(s), " + r.terms() + " terms");
+                if (verbose) {
+                    err.println(Failures.work(points.get(i), r.exact(), r.precBits(), r.attempts(), r.steps(), r.terms()));
                 }
             }
             return Main.OK;
-        } catch (InputError e) {
-            err.println("odetab: " + e.getMessage());
-            return Main.BAD_INPUT;
-        } catch (ExprException e) {
-            err.println("odetab: " + function + ": a normalization constant cannot be evaluated: " + e.getMessage());
-            return Main.BAD_INPUT;
-        } catch (SingularCrossingException e) {
-            err.println("odetab: " + e.getMessage());
-            return Main.BAD_INPUT;
+        } catch (InputError | ExprException | SingularCrossingException e) {
+            return Failures.badInput(e, function, err);
         } catch (PointLimit e) {
             err.println("odetab: " + function + " at x = " + e.point + ": " + e.getCause().getMessage()
                     + "; nothing is printed for this point (raise --precision-cap-bits)");
@@ -158,8 +148,7 @@ final class EvalCommand implements Callable<Integer> {
                 err.println("odetab: x = " + points.get(i) + ": saturated to the end of the range of " + fmt.name());
             }
             if (verbose) {
-                err.println("odetab: x = " + points.get(i) + ": " + (r.exact() ? "exact (a polynomial solution, evaluated in rational arithmetic)"
-                        : r.precBits() + " bits, " + r.attempts() + " attempt(s), " + r.steps() + " step(s), " + r.terms() + " terms"));
+                err.println(Failures.work(points.get(i), r.exact(), r.precBits(), r.attempts(), r.steps(), r.terms()));
             }
         }
         return Main.OK;

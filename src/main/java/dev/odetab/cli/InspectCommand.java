@@ -96,15 +96,8 @@ final class InspectCommand implements Callable<Integer> {
                 out.println("                c(" + m + ") = " + show(c[m]));
             }
             return Main.OK;
-        } catch (InputError e) {
-            err.println("odetab: " + e.getMessage());
-            return Main.BAD_INPUT;
-        } catch (ExprException e) {
-            err.println("odetab: " + function + ": a normalization constant cannot be evaluated: " + e.getMessage());
-            return Main.BAD_INPUT;
-        } catch (SingularCrossingException e) {
-            err.println("odetab: " + e.getMessage());
-            return Main.BAD_INPUT;
+        } catch (InputError | ExprException | SingularCrossingException e) {
+            return Failures.badInput(e, function, err);
         } finally {
             out.flush();
         }

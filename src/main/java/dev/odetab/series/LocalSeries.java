@@ -209,38 +209,9 @@ public final class LocalSeries {
      */
     public static double contractionRadiusEstimate(Recurrence rec) {
         double[] b = new double[rec.order() + 1];
-        boolean any = false;
         for (int j = 1; j <= rec.order(); j++) {
             b[j] = rec.leadingRatio(j).doubleEstimate();
-            any |= b[j] != 0;
         }
-        if (!any) {
-            return Double.POSITIVE_INFINITY;
-        }
-        double lo = 0;
-        double hi = 1;
-        while (poly(b, hi) < 1) {
-            lo = hi;
-            hi *= 2;
-        }
-        for (int i = 0; i < 100; i++) {
-            double mid = 0.5 * (lo + hi);
-            if (poly(b, mid) < 1) {
-                lo = mid;
-            } else {
-                hi = mid;
-            }
-        }
-        return lo;
-    }
-
-    private static double poly(double[] b, double r) {
-        double s = 0;
-        double pw = 1;
-        for (int j = 1; j < b.length; j++) {
-            pw *= r;
-            s += b[j] * pw;
-        }
-        return s;
+        return TailBound.unitRadiusEstimate(b);
     }
 }

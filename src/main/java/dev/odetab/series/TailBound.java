@@ -47,20 +47,7 @@ final class TailBound {
         if (allZero) {
             return null;
         }
-        double lo = 0;
-        double hi = 1;
-        while (sumEstimate(estimates, hi) < 1 && hi < 1e300) {
-            lo = hi;
-            hi *= 2;
-        }
-        for (int it = 0; it < 200 && hi - lo > 1e-15 * hi; it++) {
-            double midR = 0.5 * (lo + hi);
-            if (sumEstimate(estimates, midR) <= 1) {
-                lo = midR;
-            } else {
-                hi = midR;
-            }
-        }
+        double lo = Math.min(unitRadiusEstimate(estimates), 1e300);
         BigDecimal r = new BigDecimal(lo * (1 - 1e-9), RADIUS_CHOICE);
         for (int attempt = 0; attempt < 50 && r.signum() > 0; attempt++) {
             if (sumUp(bounds, r).compareTo(BigDecimal.ONE) <= 0) {
@@ -69,6 +56,35 @@ final class TailBound {
             r = r.multiply(new BigDecimal("0.999"), RADIUS_CHOICE);
         }
         return BigDecimal.ZERO;
+    }
+
+    /**
+     * Heuristic: the largest r with Σ_{j&gt;=1} b_j r^j &lt;= 1 for non-negative b_j, by doubling
+     * and bisection in doubles; +∞ when every b_j is zero. Chooses radii; never proves one.
+     */
+    static double unitRadiusEstimate(double[] b) {
+        boolean any = false;
+        for (int j = 1; j < b.length; j++) {
+            any |= b[j] != 0;
+        }
+        if (!any) {
+            return Double.POSITIVE_INFINITY;
+        }
+        double lo = 0;
+        double hi = 1;
+        while (sumEstimate(b, hi) < 1 && hi < 1e300) {
+            lo = hi;
+            hi *= 2;
+        }
+        for (int it = 0; it < 200 && hi - lo > 1e-15 * hi; it++) {
+            double mid = 0.5 * (lo + hi);
+            if (sumEstimate(b, mid) <= 1) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        return lo;
     }
 
     private static double sumEstimate(double[] b, double r) {
