@@ -47,14 +47,20 @@ public final class AiryReferenceData {
         return r;
     }
 
+    /** The rows of the file (layout: function,parameters,x,quantity,value,source; four lines per x). */
     public static List<Row> read() throws IOException {
         List<Row> rows = new ArrayList<>();
+        List<BigDecimal> values = new ArrayList<>();
         for (String line : Files.readAllLines(FILE, StandardCharsets.UTF_8)) {
-            if (line.startsWith("#") || line.startsWith("x,")) {
+            if (line.startsWith("#") || line.startsWith("function,")) {
                 continue;
             }
             String[] c = line.split(",");
-            rows.add(new Row(new BigDecimal(c[0]), new BigDecimal(c[1]), new BigDecimal(c[2]), new BigDecimal(c[3]), new BigDecimal(c[4])));
+            values.add(new BigDecimal(c[4]));
+            if (values.size() == 4) {
+                rows.add(new Row(new BigDecimal(c[2]), values.get(0), values.get(1), values.get(2), values.get(3)));
+                values.clear();
+            }
         }
         return rows;
     }
@@ -71,10 +77,15 @@ public final class AiryReferenceData {
         sb.append("# Airy functions Ai, Ai', Bi, Bi' (DLMF 9.2) at x = -30 + 9i/100, i = 0..500.\n");
         sb.append("# source: apfloat 1.15.0 (org.apfloat.ApfloatMath.airyAi, airyAiPrime, airyBi, airyBiPrime), 85-digit working precision,\n");
         sb.append("# written with 80 significant digits; library-generated, re-checked by AiryReferenceDataTest (slow tag).\n");
-        sb.append("x,ai,ai_prime,bi,bi_prime,source\n");
+        sb.append("function,parameters,x,quantity,value,source\n");
+        String[] functions = {"airy-ai", "airy-ai", "airy-bi", "airy-bi"};
+        String[] quantities = {"value", "derivative", "value", "derivative"};
         for (int i = 0; i < COUNT; i++) {
             String[] r = futures.get(i).get();
-            sb.append(point(i).toPlainString()).append(',').append(String.join(",", r)).append(",apfloat 1.15.0\n");
+            for (int k = 0; k < 4; k++) {
+                sb.append(functions[k]).append(",,").append(point(i).toPlainString()).append(',').append(quantities[k]).append(',')
+                        .append(r[k]).append(",apfloat 1.15.0\n");
+            }
         }
         pool.shutdown();
         Files.writeString(FILE, sb.toString(), StandardCharsets.UTF_8);

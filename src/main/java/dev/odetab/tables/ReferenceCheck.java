@@ -1,0 +1,216 @@
+package dev.odetab.tables;
+
+import dev.odetab.expr.ExprException;
+import dev.odetab.numeric.Ball;
+import dev.odetab.numeric.BallFunctions;
+import dev.odetab.numeric.Rational;
+import dev.odetab.ode.FunctionDef;
+import dev.odetab.ode.family.Catalog;
+import dev.odetab.ode.family.Family;
+import dev.odetab.ode.family.ParameterException;
+import dev.odetab.series.FunctionEvaluator;
+import dev.odetab.series.Jet;
+import java.io.IOException;
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Stream;
+
+/**
+ * {@code odetab check}: every published reference value shipped in {@code reference-data/}
+ * recomputed, and a fixed set of identities, each reported pass/fail per source.
+ *
+ * <p>Trust level: Rigorous. A reference value v written with d significant digits stands for
+ * the interval v ± ½ unit of its last digit; it passes when that interval meets the engine's
+ * enclosure of the exact value (computed with about d + 10 digits). An identity passes when
+ * its two sides, both enclosed in ball arithmetic, overlap. "Worst" reports the largest
+ * |midpoint − v| in units of the reference's last digit (≤ 0.5 for a correctly rounded reference).
+ */
+public final class ReferenceCheck {
+    private ReferenceCheck() {
+    }
+
+    /** The outcome for one source. */
+    public record Outcome(String name, String source, int count, List<String> failures, double worstUnits) {
+        public boolean passed() {
+            return failures.isEmpty();
+        }
+    }
+
+    /** A malformed reference file (a bug in the shipped data, reported with its position). */
+    public static final class DataError extends Exception {
+        private static final long serialVersionUID = 1L;
+
+        DataError(String message) {
+            super(message);
+        }
+    }
+
+    /** Every reference file of the folder (sorted by name), then the identities. */
+    public static List<Outcome> run(Path dir) throws IOException, DataError {
+        List<Outcome> r = new ArrayList<>();
+        List<Path> files;
+        try (Stream<Path> s = Files.list(dir)) {
+            files = s.filter(p -> p.toString().endsWith(".csv")).sorted().toList();
+        }
+        for (Path f : files) {
+            r.add(file(f));
+        }
+        r.addAll(identities());
+        return r;
+    }
+
+    /** One row of a reference file. */
+    private record Row(String where, String function, String params, Rational x, boolean derivative, BigDecimal value, String source) {
+    }
+
+    private static final int CAP_BITS = 1 << 15;
+
+    private static Outcome file(Path f) throws IOException, DataError {
+        List<String> lines = Files.readAllLines(f, StandardCharsets.UTF_8);
+        Map<String, List<Row>> groups = new java.util.LinkedHashMap<>();
+        String source = "";
+        for (int ln = 0; ln < lines.size(); ln++) {
+            String line = lines.get(ln);
+            if (line.startsWith("#") || line.startsWith("function,") || line.isBlank()) {
+                continue;
+            }
+            String where = f.getFileName() + ":" + (ln + 1);
+            String[] c = line.split(",", -1);
+            if (c.length != 6) {
+                throw new DataError(where + ":1: expected 6 fields (function,parameters,x,quantity,value,source), found " + c.length);
+            }
+            if (!c[3].equals("derivative") && !c[3].equals("value")) {
+                throw new DataError(where + ": quantity must be value or derivative, got '" + c[3] + "'");
+            }
+            try {
+                Row row = new Row(where, c[0], c[1], Rational.parse(c[2]), c[3].equals("derivative"), new BigDecimal(c[4]), c[5]);
+                groups.computeIfAbsent(c[0] + "|" + c[1], k -> new ArrayList<>()).add(row);
+            } catch (NumberFormatException e) {
+                throw new DataError(where + ": " + e.getMessage());
+            }
+            source = c[5];
+        }
+        List<String> failures = new ArrayList<>();
+        double worst = 0;
+        int count = 0;
+        for (List<Row> group : groups.values()) {
+            FunctionDef fn = define(group.get(0).function(), group.get(0).params(), group.get(0).where());
+            int digits = group.stream().mapToInt(r -> r.value().precision()).max().orElse(20);
+            int prec = (int) Math.ceil((digits + 10) * 3.33);
+            List<Row> pending = group;
+            while (!pending.isEmpty()) {
+                List<Rational> xs = pending.stream().map(Row::x).toList();
+                List<Jet> jets;
+                try {
+                    jets = dev.odetab.series.GridWalk.enclose(fn, xs, prec);
+                } catch (ExprException e) {
+                    throw new DataError(pending.get(0).where() + ": " + e.getMessage());
+                }
+                List<Row> still = new ArrayList<>();
+                for (int i = 0; i < pending.size(); i++) {
+                    Row row = pending.get(i);
+                    Ball b = row.derivative() ? jets.get(i).derivative() : jets.get(i).value();
+                    BigDecimal unit = row.value().ulp();
+                    // judge only once the enclosure is narrower than a quarter of the reference's last digit
+                    if (b.rad().compareTo(unit.divide(BigDecimal.valueOf(4))) > 0 && prec < CAP_BITS) {
+                        still.add(row);
+                        continue;
+                    }
+                    count++;
+                    worst = Math.max(worst, b.mid().subtract(row.value()).abs().divide(unit, MathContext.DECIMAL64).doubleValue());
+                    if (!b.addError(unit.divide(BigDecimal.valueOf(2))).contains(row.value())) {
+                        failures.add(row.where() + ": " + row.function() + (row.params().isEmpty() ? "" : " (" + row.params() + ")")
+                                + (row.derivative() ? " derivative" : " value") + " at x = " + row.x().toDecimalOrFraction()
+                                + ": reference " + row.value() + " is not consistent with the enclosure " + b);
+                    }
+                }
+                pending = still;
+                prec *= 2;
+            }
+        }
+        return new Outcome(f.getFileName().toString(), source, count, failures, worst);
+    }
+
+    private static FunctionDef define(String name, String params, String where) throws DataError {
+        Family family = Catalog.lookup(name).orElseThrow(() -> new DataError(where + ": unknown family '" + name + "'"));
+        Map<String, Rational> values = new HashMap<>();
+        if (!params.isBlank()) {
+            for (String p : params.split(";")) {
+                String[] kv = p.split("=", 2);
+                values.put(kv[0].strip(), Rational.parse(kv[1].strip()));
+            }
+        }
+        try {
+            return family.define(values);
+        } catch (ParameterException e) {
+            throw new DataError(where + ": " + e.getMessage());
+        }
+    }
+
+    /** Identities that need no outside digits: Wronskians, recurrences, closed forms (all as ball overlap). */
+    static List<Outcome> identities() throws DataError {
+        List<Outcome> r = new ArrayList<>();
+        int p = 200;
+        try {
+            // DLMF 9.2.7: W{Ai, Bi} = Ai Bi' − Ai' Bi = 1/π.
+            FunctionDef ai = Catalog.lookup("airy-ai").orElseThrow().define(Map.of());
+            FunctionDef bi = Catalog.lookup("airy-bi").orElseThrow().define(Map.of());
+            Ball invPi = Ball.ONE.divide(BallFunctions.pi(p), p);
+            List<String> fails = new ArrayList<>();
+            String[] xs = {"-7.5", "-1", "0", "1/3", "2", "4.25"};
+            for (String xs1 : xs) {
+                Jet a = FunctionEvaluator.enclose(ai, Rational.parse(xs1), p).jet();
+                Jet b = FunctionEvaluator.enclose(bi, Rational.parse(xs1), p).jet();
+                Ball w = a.value().multiply(b.derivative(), p).subtract(a.derivative().multiply(b.value(), p), p);
+                if (!w.overlaps(invPi)) {
+                    fails.add("W{Ai, Bi}(" + xs1 + ") = " + w + " does not contain 1/pi");
+                }
+            }
+            r.add(new Outcome("identity W{Ai, Bi} = 1/pi", "DLMF 9.2.7", xs.length, fails, 0));
+
+            // DLMF 12.7.2: U(−1/2, x) = e^(−x²/4).
+            FunctionDef u = Catalog.lookup("weber-u").orElseThrow().define(Map.of("a", Rational.of(-1, 2)));
+            fails = new ArrayList<>();
+            String[] ux = {"-3", "-0.5", "1", "2.75"};
+            for (String s : ux) {
+                Rational x = Rational.parse(s);
+                Ball v = FunctionEvaluator.enclose(u, x, p).jet().value();
+                Ball e = BallFunctions.exp(Ball.of(x.multiply(x).divide(Rational.of(-4)), p), p);
+                if (!v.overlaps(e)) {
+                    fails.add("U(-1/2, " + s + ") = " + v + " differs from exp(-x^2/4) = " + e);
+                }
+            }
+            r.add(new Outcome("identity U(-1/2, x) = exp(-x^2/4)", "DLMF 12.7.2", ux.length, fails, 0));
+
+            // DLMF 18.9.1 for the orthonormal Hermite functions: x ψ_n = sqrt((n+1)/2) ψ_{n+1} + sqrt(n/2) ψ_{n−1}.
+            fails = new ArrayList<>();
+            int count = 0;
+            for (int n = 1; n <= 12; n += 5) {
+                FunctionDef lo = Catalog.lookup("hermite-function").orElseThrow().define(Map.of("n", Rational.of(n - 1)));
+                FunctionDef mid = Catalog.lookup("hermite-function").orElseThrow().define(Map.of("n", Rational.of(n)));
+                FunctionDef hi = Catalog.lookup("hermite-function").orElseThrow().define(Map.of("n", Rational.of(n + 1)));
+                for (String s : new String[] {"-2.5", "0.75", "3"}) {
+                    Rational x = Rational.parse(s);
+                    Ball left = FunctionEvaluator.enclose(mid, x, p).jet().value().multiply(x, p);
+                    Ball right = BallFunctions.sqrt(Ball.of(Rational.of(n + 1, 2), p), p).multiply(FunctionEvaluator.enclose(hi, x, p).jet().value(), p)
+                            .add(BallFunctions.sqrt(Ball.of(Rational.of(n, 2), p), p).multiply(FunctionEvaluator.enclose(lo, x, p).jet().value(), p), p);
+                    count++;
+                    if (!left.overlaps(right)) {
+                        fails.add("x psi_" + n + "(" + s + ") = " + left + " but the recurrence gives " + right);
+                    }
+                }
+            }
+            r.add(new Outcome("identity x psi_n = sqrt((n+1)/2) psi_n+1 + sqrt(n/2) psi_n-1", "DLMF 18.9.1 (orthonormal form)", count, fails, 0));
+        } catch (ExprException | ParameterException e) {
+            throw new DataError("identity check: " + e.getMessage());
+        }
+        return r;
+    }
+}
