@@ -4,6 +4,7 @@ import dev.odetab.expr.Poly;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.Equation;
 import java.math.BigInteger;
+import java.math.MathContext;
 
 /**
  * Analytic continuation of a solution along the real line, by a chain of Taylor steps.
@@ -121,7 +122,6 @@ public final class Continuation {
                 return near.toDecimalOrFraction();
             }
         }
-        return new java.math.BigDecimal(guess.numerator()).divide(new java.math.BigDecimal(guess.denominator()),
-                java.math.MathContext.DECIMAL64).round(new java.math.MathContext(12)).toPlainString() + " (approximately)";
+        return guess.toBigDecimal(new MathContext(12)).toPlainString() + " (approximately)";
     }
 }

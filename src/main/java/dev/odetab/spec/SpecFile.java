@@ -171,7 +171,7 @@ public final class SpecFile {
         if (f.contains("at")) {
             String atText = string(base, f, "at");
             ConstExpr atExpr = constant(child(base, "at"), atText);
-            at = atExpr.exact().orElseThrow(() -> errorUnchecked(child(base, "at"),
+            at = atExpr.exact().orElseThrow(() -> error(child(base, "at"),
                     "the normalization point must be an exact rational, got '" + atText + "'"));
             if (!eq.isOrdinary(at)) {
                 throw error(child(base, "at"), "x = " + at.toDecimalOrFraction()
@@ -185,7 +185,7 @@ public final class SpecFile {
 
     private FunctionDef familyFunction(String qualified, List<String> base, TomlTable f) throws InputError {
         String familyName = string(base, f, "family");
-        Family family = Catalog.lookup(familyName).orElseThrow(() -> errorUnchecked(child(base, "family"),
+        Family family = Catalog.lookup(familyName).orElseThrow(() -> error(child(base, "family"),
                 "unknown family '" + familyName + "'" + Suggestions.hint(familyName, Catalog.names())
                         + " (known: " + String.join(", ", Catalog.names()) + ")"));
         Set<String> allowed = new LinkedHashSet<>();
@@ -217,7 +217,7 @@ public final class SpecFile {
         }
         if (raw instanceof String s) {
             ConstExpr e = constant(key, s);
-            return e.exact().orElseThrow(() -> errorUnchecked(key,
+            return e.exact().orElseThrow(() -> error(key,
                     "a parameter must be an exact rational, and '" + s + "' is not known to be one"));
         }
         if (raw instanceof Double) {
@@ -261,10 +261,6 @@ public final class SpecFile {
         TomlPosition p = toml.inputPositionOf(key);
         String where = p == null ? display : display + ":" + p.line() + ":" + p.column();
         return new InputError(where, message);
-    }
-
-    private InputError errorUnchecked(List<String> key, String message) {
-        return error(key, message);
     }
 
     /** An error at a 1-based column inside the string value of a key. */
