@@ -2,6 +2,7 @@ package dev.odetab.cli;
 
 import dev.odetab.expr.ConstExpr;
 import dev.odetab.expr.ExprException;
+import dev.odetab.expr.Poly;
 import dev.odetab.expr.RationalFunction;
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.DecimalDigits;
@@ -19,6 +20,7 @@ import dev.odetab.spec.InputError;
 import java.io.PrintWriter;
 import java.math.BigDecimal;
 import java.util.List;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -37,6 +39,8 @@ final class InspectCommand implements Callable<Integer> {
     private static final int COEFFICIENTS = 8;
     private static final int SHOW_DIGITS = 20;
     private static final int WORK_BITS = 128;
+    /** Exact polynomials up to this degree are printed in full. */
+    private static final int MAX_SHOWN_DEGREE = 12;
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
@@ -80,6 +84,15 @@ final class InspectCommand implements Callable<Integer> {
             }
             out.println("normalization   y(" + f.at().toDecimalOrFraction() + ") = " + constant(f.value()));
             out.println("                y'(" + f.at().toDecimalOrFraction() + ") = " + constant(f.slope()));
+            Optional<Poly> poly = FunctionEvaluator.polynomial(f);
+            if (poly.isPresent()) {
+                int order = new Recurrence(eq, f.at()).order();
+                out.println("exact           polynomial of degree " + poly.get().degree() + ": the series terminates (" + order
+                        + " consecutive zero coefficients), so values are exact rationals rounded once");
+                if (poly.get().degree() <= MAX_SHOWN_DEGREE) {
+                    out.println("                y = " + poly.get());
+                }
+            }
             BigDecimal radius = SingularPoints.radiusLowerBound(eq, x);
             out.println("radius          " + (radius == null
                     ? "infinite at x = " + x.toDecimalOrFraction() + ": every solution is entire (no singular point)"

@@ -42,14 +42,16 @@ class BadInputTest {
     @Test
     void unknownFamily() {
         expect("argument 2 'airy-aj', column 1: unknown function 'airy-aj'; did you mean 'airy-ai'? "
-                + "(built-in families: airy-ai, airy-bi, hermite-function, weber-u; or SPEC#NAME for a spec function)",
+                + "(built-in families: airy-ai, airy-bi, hermite-h, hermite-he, hermite-function, legendre-p, legendre-q, chebyshev-t, "
+                + "chebyshev-u, laguerre-l, gegenbauer-c, jacobi-p, weber-u; or SPEC#NAME for a spec function)",
                 "eval", "airy-aj", "1");
     }
 
     @Test
     void unknownFamilyInASpec() {
         expect(DIR + "unknown-family.toml:2:1: unknown family 'hermite-functoin'; did you mean 'hermite-function'? "
-                + "(known: airy-ai, airy-bi, hermite-function, weber-u)",
+                + "(known: airy-ai, airy-bi, hermite-h, hermite-he, hermite-function, legendre-p, legendre-q, chebyshev-t, "
+                + "chebyshev-u, laguerre-l, gegenbauer-c, jacobi-p, weber-u)",
                 "eval", DIR + "unknown-family.toml#f", "1");
     }
 

@@ -50,4 +50,16 @@ class InspectCommandTest {
         // DLMF 9.2.1: y'' = x y gives c(m) = c(m−3)/(m(m−1)).
         assertTrue(r.out().contains("c(m) = [1]*c(m-3)  /  [m^2 - m]"), r.out());
     }
+
+    @Test
+    void saysWhyAMemberIsAnExactPolynomial() {
+        // P_3 = (5x^3 - 3x)/2, DLMF Table 18.3.1 / 18.5
+        CliRunner.Result r = CliRunner.run("inspect", "legendre-p", "-p", "n=3");
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("exact           polynomial of degree 3: the series terminates (2 consecutive zero coefficients), "
+                + "so values are exact rationals rounded once\n                y = (5/2)*x^3 - (3/2)*x\n"), r.out());
+        CliRunner.Result q = CliRunner.run("inspect", "legendre-q", "-p", "n=3");
+        assertEquals(0, q.code(), q.err());
+        assertTrue(!q.out().contains("exact           polynomial"), q.out());
+    }
 }

@@ -11,7 +11,9 @@ public final class Catalog {
     private static final Map<String, Family> FAMILIES = new LinkedHashMap<>();
 
     static {
-        for (Family f : List.of(Airy.ai(), Airy.bi(), new HermiteFunction(), new Weber())) {
+        for (Family f : List.of(Airy.ai(), Airy.bi(), new HermiteH(), new HermiteHe(), new HermiteFunction(),
+                new LegendreP(), new LegendreQ(), new ChebyshevT(), new ChebyshevU(), new LaguerreL(), new GegenbauerC(),
+                new JacobiP(), new Weber())) {
             FAMILIES.put(f.name(), f);
         }
     }

@@ -2,8 +2,11 @@ package dev.odetab.ode.family;
 
 import dev.odetab.numeric.Rational;
 
-/** Checks shared by families whose parameter is an integer degree. */
+/** Checks and exact constants shared by families whose parameter is an integer degree. */
 final class Degrees {
+    /** The largest degree of the polynomial families. */
+    static final int MAX_DEGREE = 1000;
+
     private Degrees() {
     }
 
@@ -16,5 +19,37 @@ final class Degrees {
                     + min + " <= " + name + " <= " + max);
         }
         return value.numerator().intValueExact();
+    }
+
+    /**
+     * A rational parameter with {@code lower < value <= upper}; {@code null} gives {@code fallback}
+     * (or an error when there is none). {@code range} is the allowed range in words.
+     */
+    static Rational above(String name, Rational value, Rational lower, Rational upper, Rational fallback, String range)
+            throws ParameterException {
+        if (value == null) {
+            if (fallback != null) {
+                return fallback;
+            }
+            throw new ParameterException(name, "missing parameter " + name + " (" + range + ")");
+        }
+        if (value.compareTo(lower) <= 0 || value.compareTo(upper) > 0) {
+            throw new ParameterException(name, name + " = " + value.toDecimalOrFraction() + " is outside the allowed range: " + range);
+        }
+        return value;
+    }
+
+    /** The Pochhammer symbol (a)_k = a (a + 1) … (a + k − 1), exactly (DLMF 5.2.4). */
+    static Rational pochhammer(Rational a, int k) {
+        Rational p = Rational.ONE;
+        for (int i = 0; i < k; i++) {
+            p = p.multiply(a.add(Rational.of(i)));
+        }
+        return p;
+    }
+
+    /** (−1)^k. */
+    static int sign(int k) {
+        return k % 2 == 0 ? 1 : -1;
     }
 }

@@ -19,6 +19,11 @@ final class Normalizations {
         }
     }
 
+    /** An exact rational normalization constant. */
+    static ConstExpr exact(Rational r) {
+        return parse(r.toString(), Map.of());
+    }
+
     /** The value as an exact parameter, for expressions: {@code (-1/3)}. */
     static String literal(Rational r) {
         return "(" + r + ")";

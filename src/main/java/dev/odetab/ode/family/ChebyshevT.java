@@ -1,0 +1,42 @@
+package dev.odetab.ode.family;
+
+import dev.odetab.expr.Poly;
+import dev.odetab.numeric.Rational;
+import dev.odetab.ode.Equation;
+import dev.odetab.ode.FunctionDef;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Chebyshev polynomial of the first kind T_n(x) (DLMF 18.3), the solution of
+ * (1 − x²) y'' − x y' + n² y = 0 (DLMF 18.8, Table 18.8.1). From T_n(cos θ) = cos(nθ)
+ * (DLMF 18.5.1) at θ = π/2: T_n(0) = cos(nπ/2) and T_n'(0) = n sin(nπ/2), that is
+ * (−1)^(n/2) and 0 for even n, 0 and n (−1)^((n−1)/2) for odd n.
+ */
+public final class ChebyshevT implements Family {
+    @Override
+    public String name() {
+        return "chebyshev-t";
+    }
+
+    @Override
+    public String title() {
+        return "Chebyshev polynomial of the first kind T_n(x) (DLMF 18.3, 18.8)";
+    }
+
+    @Override
+    public List<Parameter> parameters() {
+        return List.of(new Parameter("n", "degree", "an integer 0 <= n <= " + Degrees.MAX_DEGREE));
+    }
+
+    @Override
+    public FunctionDef define(Map<String, Rational> values) throws ParameterException {
+        int n = Degrees.integer("n", values.get("n"), 0, Degrees.MAX_DEGREE);
+        Equation eq = new Equation(Poly.of(Rational.ONE, Rational.ZERO, Rational.of(-1)), Poly.of(Rational.ZERO, Rational.of(-1)),
+                Poly.constant(Rational.of((long) n * n)));
+        Rational value = n % 2 == 0 ? Rational.of(Degrees.sign(n / 2)) : Rational.ZERO;
+        Rational slope = n % 2 == 0 ? Rational.ZERO : Rational.of((long) n * Degrees.sign((n - 1) / 2));
+        return new FunctionDef(name(), eq, Rational.ZERO, Normalizations.exact(value), Normalizations.exact(slope),
+                Map.of("n", Rational.of(n)), "DLMF 18.3, 18.5.1, 18.8 (Table 18.8.1)");
+    }
+}

@@ -1,0 +1,58 @@
+package dev.odetab.ode.family;
+
+import dev.odetab.expr.Poly;
+import dev.odetab.numeric.Rational;
+import dev.odetab.ode.Equation;
+import dev.odetab.ode.FunctionDef;
+import java.math.BigInteger;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Legendre polynomial P_n(x) (DLMF 18.3), the solution of (1 − x²) y'' − 2x y' + n(n + 1) y = 0
+ * (DLMF 14.2.1 with μ = 0, 18.8 Table 18.8.1). At 0, DLMF 14.5.1 and 14.5.2 with μ = 0 reduce for
+ * integer n to P_n(0) = (−1)^(n/2) binom(n, n/2) / 2^n for even n and 0 for odd n, and
+ * P_n'(0) = n P_(n−1)(0) (also DLMF 14.10.5 at x = 0: (1 − x²) P_n' = n (P_(n−1) − x P_n)).
+ */
+public final class LegendreP implements Family {
+    @Override
+    public String name() {
+        return "legendre-p";
+    }
+
+    @Override
+    public String title() {
+        return "Legendre polynomial P_n(x) (DLMF 14.2, 18.3)";
+    }
+
+    @Override
+    public List<Parameter> parameters() {
+        return List.of(new Parameter("n", "degree", "an integer 0 <= n <= " + Degrees.MAX_DEGREE));
+    }
+
+    @Override
+    public FunctionDef define(Map<String, Rational> values) throws ParameterException {
+        int n = Degrees.integer("n", values.get("n"), 0, Degrees.MAX_DEGREE);
+        Rational slope = n == 0 ? Rational.ZERO : atZero(n - 1).multiply(n);
+        return new FunctionDef(name(), equation(n), Rational.ZERO, Normalizations.exact(atZero(n)), Normalizations.exact(slope),
+                Map.of("n", Rational.of(n)), "DLMF 14.2.1, 14.5.1, 14.5.2, 18.3, 18.8 (Table 18.8.1)");
+    }
+
+    /** Legendre's equation of degree n (DLMF 14.2.1, μ = 0). */
+    static Equation equation(int n) {
+        return new Equation(Poly.of(Rational.ONE, Rational.ZERO, Rational.of(-1)), Poly.of(Rational.ZERO, Rational.of(-2)),
+                Poly.constant(Rational.of((long) n * (n + 1))));
+    }
+
+    /** P_n(0) exactly. */
+    static Rational atZero(int n) {
+        if (n % 2 != 0) {
+            return Rational.ZERO;
+        }
+        BigInteger binom = BigInteger.ONE;
+        for (int k = 1; k <= n / 2; k++) {
+            binom = binom.multiply(BigInteger.valueOf(n / 2 + k)).divide(BigInteger.valueOf(k));
+        }
+        return Rational.of(binom.multiply(BigInteger.valueOf(Degrees.sign(n / 2))), BigInteger.ONE.shiftLeft(n));
+    }
+}
