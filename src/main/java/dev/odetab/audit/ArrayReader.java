@@ -65,6 +65,7 @@ final class ArrayReader {
         return new Entries(display, chosen.get(0).name(), entries(display, chosen.get(0), format), null);
     }
 
+    /** Exact: the held values of the entries of one array, in order. */
     private static List<Entries.Item> entries(String display, Array a, Format format) throws InputError {
         List<Entries.Item> items = new ArrayList<>();
         List<Token> b = a.body();
@@ -125,7 +126,7 @@ final class ArrayReader {
         return items;
     }
 
-    /** The arrays of the token stream, with their bodies (depth-matched braces). */
+    /** Exact: the arrays of the token stream, with their bodies (depth-matched braces). */
     private static List<Array> arrays(String display, List<Token> ts) throws InputError {
         List<Array> r = new ArrayList<>();
         for (int i = 0; i < ts.size(); i++) {
@@ -174,7 +175,7 @@ final class ArrayReader {
     }
 
     /**
-     * Tokens: identifiers (Java qualified names joined, kind 'i'), numbers (kind 'n'),
+     * Exact: tokens: identifiers (Java qualified names joined, kind 'i'), numbers (kind 'n'),
      * punctuation (kind 'p'); comments, strings, character literals and preprocessor lines
      * are dropped.
      */
@@ -261,7 +262,7 @@ final class ArrayReader {
         return r;
     }
 
-    /** Whether s[k] is the exponent mark of the number starting at {@code start} (e/E, or p/P in hex). */
+    /** Exact: whether s[k] is the exponent mark of the number starting at {@code start} (e/E, or p/P in hex). */
     private static boolean exponentMark(String s, int start, int k) {
         char e = s.charAt(k);
         boolean hex = s.length() > start + 1 && s.charAt(start) == '0' && (s.charAt(start + 1) == 'x' || s.charAt(start + 1) == 'X');

@@ -39,7 +39,7 @@ public final class AuditReport {
                 .thenComparingInt(AuditResult.Row::index)).limit(WORST).toList();
     }
 
-    /** Number of entries beyond the tolerance (rigorous decision). */
+    /** Rigorous: the number of entries beyond the tolerance, as {@link Auditor} decided them. */
     public static long beyondTolerance(AuditResult a) {
         return a.rows().stream().filter(AuditResult.Row::beyond).count();
     }
@@ -74,6 +74,7 @@ public final class AuditReport {
         return sb.toString();
     }
 
+    /** Heuristic: entries whose midpoint error exceeds {@code threshold} ulps. */
     static long count(AuditResult a, double threshold) {
         return a.rows().stream().filter(r -> Math.abs(r.ulps()) > threshold).count();
     }

@@ -107,6 +107,7 @@ public final class Auditor {
         return new AuditResult(t, column.name(), e, List.of(rows), tolerance, maxPrec);
     }
 
+    /** Exact: the grid index entry i stands for. */
     private static int gridIndex(Entries e, int i) {
         return e.xs() == null ? i : e.xs().get(i);
     }

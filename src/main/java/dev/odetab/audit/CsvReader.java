@@ -98,6 +98,7 @@ final class CsvReader {
         return new Entries(display, header.get(valueCol), items, xs);
     }
 
+    /** Exact: the index of the value column ({@code NAME_hex} preferred in binary formats). */
     private static int chooseColumn(String display, List<String> header, String column, Format format) throws InputError {
         int hexCol = header.indexOf(column + "_hex");
         if (hexCol >= 0 && format instanceof Format.BinaryFormat && !column.endsWith("_hex")) {
@@ -159,7 +160,7 @@ final class CsvReader {
         return display + ":" + line + ":" + column(lineText, c);
     }
 
-    /** The 1-based character column where field {@code c} starts on its line (RFC 4180 quotes respected). */
+    /** Exact: the 1-based character column where field {@code c} starts on its line (RFC 4180 quotes respected). */
     static int column(String lineText, int c) {
         int field = 0;
         boolean quoted = false;

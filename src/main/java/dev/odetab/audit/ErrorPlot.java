@@ -38,6 +38,7 @@ public final class ErrorPlot {
     private ErrorPlot() {
     }
 
+    /** Heuristic (presentation): the chart; infinite errors are drawn at ±Double.MAX_VALUE. */
     private static JFreeChart chart(AuditResult a) {
         XYSeries s = new XYSeries("error", false, true);
         for (AuditResult.Row r : a.rows()) {
@@ -67,7 +68,7 @@ public final class ErrorPlot {
         return chart;
     }
 
-    /** The PNG image. */
+    /** Heuristic (presentation): the plot as a PNG image. */
     public static byte[] png(AuditResult a) {
         BufferedImage img = chart(a).createBufferedImage(WIDTH, HEIGHT);
         ByteArrayOutputStream out = new ByteArrayOutputStream();
@@ -79,7 +80,7 @@ public final class ErrorPlot {
         return out.toByteArray();
     }
 
-    /** The SVG document. */
+    /** Heuristic (presentation): the plot as an SVG document, deterministic bytes. */
     public static byte[] svg(AuditResult a) {
         SVGGraphics2D g = new SVGGraphics2D(WIDTH, HEIGHT);
         g.setDefsKeyPrefix("odetab");
