@@ -3,12 +3,13 @@ package dev.odetab.emit;
 import java.util.List;
 import java.util.Map;
 
-/** A tiny deterministic JSON writer for the manifest (keys in insertion order, 2-space indent, \n). */
-final class Json {
+/** A tiny deterministic JSON writer for the manifest and the audit summary (keys in insertion order, 2-space indent, \n). */
+public final class Json {
     private Json() {
     }
 
-    static String write(Object value) {
+    /** The JSON text of maps, lists, strings, numbers and booleans, ending with a newline. */
+    public static String write(Object value) {
         StringBuilder sb = new StringBuilder();
         write(sb, value, 0);
         return sb.append('\n').toString();

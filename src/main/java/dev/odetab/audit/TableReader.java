@@ -1,0 +1,42 @@
+package dev.odetab.audit;
+
+import dev.odetab.spec.InputError;
+import dev.odetab.tables.TableDef;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.Locale;
+
+/**
+ * Reads a foreign table: {@code .csv} files by {@link CsvReader}, anything else as C or Java
+ * source by {@link ArrayReader}.
+ *
+ * <p>Trust level: Exact (the values held, see {@link Held}).
+ */
+public final class TableReader {
+    private TableReader() {
+    }
+
+    /** Exact: the entries of {@code column} (CSV column or array name) of the file, for table {@code t}. */
+    public static Entries read(Path file, String column, TableDef t) throws InputError {
+        String display = file.toString();
+        String text;
+        try {
+            text = new String(Files.readAllBytes(file), StandardCharsets.UTF_8);
+        } catch (NoSuchFileException e) {
+            throw new InputError(display, "no such file");
+        } catch (IOException e) {
+            throw new InputError(display, "cannot read the file: " + e.getMessage());
+        }
+        if (display.toLowerCase(Locale.ROOT).endsWith(".csv")) {
+            return CsvReader.read(display, text, column, t.format(), t.grid().points());
+        }
+        if (t.format() instanceof dev.odetab.numeric.Format.DoubleDouble
+                || t.format().equals(dev.odetab.numeric.Format.BinaryFormat.BINARY128)) {
+            throw new InputError(display, "double-double and binary128 tables are audited from CSV files only");
+        }
+        return ArrayReader.read(display, text, column, t.format());
+    }
+}
