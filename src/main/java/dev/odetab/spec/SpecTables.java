@@ -25,7 +25,7 @@ import org.tomlj.TomlTable;
 /** Reading and validating the {@code [tables.*]} part of a spec (DESIGN.md "Spec file"). */
 final class SpecTables {
     static final Set<String> TABLE_KEYS = new LinkedHashSet<>(List.of("function", "kind", "grid", "points", "columns",
-            "format", "rounding", "out_of_range", "precision_cap_bits", "outputs", "terms"));
+            "format", "rounding", "out_of_range", "precision_cap_bits", "outputs", "terms", "search", "count", "of"));
     static final Set<String> GRID_KEYS = new LinkedHashSet<>(List.of("from", "to", "step"));
     static final Set<String> KINDS = new LinkedHashSet<>(List.of("values", "zeros", "quadrature", "taylor"));
     static final Set<String> BUILT_IN_OUTPUTS = new LinkedHashSet<>(List.of("csv", "c", "java"));
@@ -75,8 +75,13 @@ final class SpecTables {
             throw spec.error(child(base, "kind"), "unknown kind '" + kind + "'" + Suggestions.hint(kind, KINDS)
                     + " (kinds: " + String.join(", ", KINDS) + ")");
         }
-        if (!kind.equals("values") && !kind.equals("taylor")) {
-            throw spec.error(child(base, "kind"), "kind '" + kind + "' is not available in this version of odetab (available: values, taylor)");
+        if (kind.equals("quadrature")) {
+            throw spec.error(child(base, "kind"), "kind '" + kind + "' is not available in this version of odetab (available: values, taylor, zeros)");
+        }
+        for (String zeroKey : List.of("search", "count", "of")) {
+            if (!kind.equals("zeros") && t.contains(zeroKey)) {
+                throw spec.error(child(base, zeroKey), "'" + zeroKey + "' belongs to zeros tables (kind = \"zeros\")");
+            }
         }
         int terms = 0;
         if (kind.equals("taylor")) {
@@ -96,8 +101,8 @@ final class SpecTables {
         }
         String fname = string(base, t, "function");
         FunctionDef f = function(child(base, "function"), fname);
-        Grid grid = grid(base, t);
-        List<Column> columns = columns(base, t, terms);
+        Grid grid = kind.equals("zeros") ? zeroSearch(base, t) : grid(base, t);
+        List<Column> columns = kind.equals("zeros") && !t.contains("columns") ? List.of(Column.parse("x")) : columns(base, t, terms);
         Format format = Format.BinaryFormat.BINARY64;
         if (t.contains("format")) {
             String text = string(base, t, "format");
@@ -224,6 +229,48 @@ final class SpecTables {
             throw spec.error(child(gk, "step"), "the grid has " + count.add(Rational.ONE) + " points; at most " + MAX_POINTS + " are allowed");
         }
         return new Grid.Uniform(from, to, step);
+    }
+
+    private Grid zeroSearch(List<String> base, TomlTable t) throws InputError {
+        if (t.contains("grid") || t.contains("points")) {
+            throw spec.error(child(base, t.contains("grid") ? "grid" : "points"), "a zeros table searches an interval: give 'search' instead of a grid");
+        }
+        if (!t.isTable(List.of("search"))) {
+            throw spec.error(t.contains("search") ? child(base, "search") : base,
+                    "a zeros table needs search = { from = \"…\", to = \"…\" } (zeros met walking from 'from' to 'to')");
+        }
+        List<String> sk = child(base, "search");
+        TomlTable g = t.getTable(List.of("search"));
+        for (String key : g.keySet()) {
+            if (!key.equals("from") && !key.equals("to")) {
+                throw spec.error(child(sk, key), "unknown key '" + key + "' in search (it has: from, to)");
+            }
+        }
+        if (!g.contains("from") || !g.contains("to")) {
+            throw spec.error(sk, "search needs 'from' and 'to'");
+        }
+        Rational from = exactValue(child(sk, "from"), g.get(List.of("from")));
+        Rational to = exactValue(child(sk, "to"), g.get(List.of("to")));
+        if (from.equals(to)) {
+            throw spec.error(child(sk, "to"), "the search interval is empty (from = to)");
+        }
+        int count = 0;
+        if (t.contains("count")) {
+            Object v = t.get(List.of("count"));
+            if (!(v instanceof Long l) || l < 1 || l > 100_000) {
+                throw spec.error(child(base, "count"), "'count' must be an integer from 1 to 100000");
+            }
+            count = (int) (long) l;
+        }
+        boolean ofDerivative = false;
+        if (t.contains("of")) {
+            String of = string(base, t, "of");
+            if (!of.equals("value") && !of.equals("derivative")) {
+                throw spec.error(child(base, "of"), "'of' must be \"value\" (zeros of y) or \"derivative\" (zeros of y')");
+            }
+            ofDerivative = of.equals("derivative");
+        }
+        return new Grid.ZeroSearch(from, to, count, ofDerivative);
     }
 
     static final Set<String> CHEBYSHEV_KEYS = new LinkedHashSet<>(List.of("chebyshev", "n", "from", "to"));

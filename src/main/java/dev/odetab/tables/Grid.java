@@ -161,6 +161,32 @@ public sealed interface Grid {
         }
     }
 
+    /**
+     * Not a grid but a search: the zeros of y (or of y' when {@code ofDerivative}) met walking
+     * from {@code from} to {@code to}, at most {@code count} of them (0: all). The points are
+     * found by {@link ZeroFinder}; they are irrational in general, so the table holds each zero
+     * correctly rounded.
+     */
+    record ZeroSearch(Rational from, Rational to, int count, boolean ofDerivative) implements Grid {
+        @Override
+        public List<Rational> points() {
+            return List.of();
+        }
+
+        @Override
+        public boolean hasIrrationalPoints() {
+            return true;
+        }
+
+        @Override
+        public String describe() {
+            return "zeros of " + (ofDerivative ? "y'" : "y") + " met walking from " + from.toDecimalOrFraction() + " to "
+                    + to.toDecimalOrFraction() + (count > 0 ? ", the first " + count : "")
+                    + "; isolated on cells where a Taylor enclosure proves that " + (ofDerivative ? "y'" : "y")
+                    + " keeps its sign or is strictly monotone, so every zero is counted exactly once";
+        }
+    }
+
     /** Explicit points, in the order given. */
     record Points(List<Rational> points) implements Grid {
         public Points {

@@ -54,6 +54,9 @@ public final class TableEvaluator {
     }
 
     public static TableResult evaluate(TableDef t) throws ExprException, UndecidedException, OutOfRangeException {
+        if (t.grid() instanceof Grid.ZeroSearch z) {
+            return ZeroFinder.find(t, z);
+        }
         List<Rational> xs = t.grid().points();
         int n = xs.size();
         List<Column> cols = t.columns();

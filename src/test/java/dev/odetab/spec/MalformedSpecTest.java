@@ -33,7 +33,7 @@ class MalformedSpecTest {
             Map.entry("unknown-top-level-key.toml",
                     "2:1: unknown key 'tabels'; did you mean 'tables'? (allowed at the top: functions, tables, title)"),
             Map.entry("unknown-table-key.toml", "4:1: unknown key 'fromat'; did you mean 'format'? (a table has: function, kind, "
-                    + "grid, points, columns, format, rounding, out_of_range, precision_cap_bits, outputs, terms)"),
+                    + "grid, points, columns, format, rounding, out_of_range, precision_cap_bits, outputs, terms, search, count, of)"),
             Map.entry("format-not-a-string.toml", "4:1: 'format' must be a string"),
             Map.entry("step-does-not-divide.toml", "3:32: the step 0.375 does not divide the range from 0 to 1 (8/3 steps)"),
             Map.entry("step-wrong-sign.toml", "3:33: the step 0.25 does not lead from 1 to -1"),
@@ -59,7 +59,7 @@ class MalformedSpecTest {
             Map.entry("family-needs-parameters.toml", "2:1: the family hermite-function takes parameters (n), so a table cannot "
                     + "name it directly: define a function under [functions] with family = \"hermite-function\" and its parameters, "
                     + "and name that function here"),
-            Map.entry("kind-zeros.toml", "2:1: kind 'zeros' is not available in this version of odetab (available: values, taylor)"),
+            Map.entry("kind-quadrature.toml", "2:1: kind 'quadrature' is not available in this version of odetab (available: values, taylor, zeros)"),
             Map.entry("singular-at.toml",
                     "3:1: x = -1 is a singular point of the equation (its coefficient of y'' vanishes there); choose an ordinary point"),
             Map.entry("bad-value-expression.toml", "3:18: expected ')' to close the '(' at column 16, found the end of the text"),
