@@ -71,6 +71,27 @@ class AuditTest {
             columns = ["value"]
             format = "fixed:s16.15"
             outputs = ["csv", "c"]
+
+            [tables.aidd]
+            function = "ai"
+            grid = { from = "-2", to = "2", step = "1/8" }
+            columns = ["x", "value"]
+            format = "double-double"
+            outputs = ["csv"]
+
+            [tables.ai128]
+            function = "ai"
+            grid = { from = "-2", to = "2", step = "1/8" }
+            columns = ["x", "value"]
+            format = "binary128"
+            outputs = ["csv"]
+
+            [tables.aidec]
+            function = "ai"
+            grid = { from = "-2", to = "2", step = "1/8" }
+            columns = ["x", "value"]
+            format = "decimal:25"
+            outputs = ["csv"]
             """;
 
     @TempDir
@@ -112,7 +133,8 @@ class AuditTest {
     void ownTablesAuditCleanInEveryFormat() throws IOException {
         String[][] cases = {
             {"ai64", "ai64.c"}, {"ai64", "ai64.csv"}, {"ai64", "Ai64.java"}, {"ai32", "ai32.c"}, {"ai32", "ai32.csv"},
-            {"ai16", "ai16.c"}, {"ai16", "ai16.csv"}, {"aiq15", "aiq15.c"}, {"aiq15", "aiq15.csv"}};
+            {"ai16", "ai16.c"}, {"ai16", "ai16.csv"}, {"aiq15", "aiq15.c"}, {"aiq15", "aiq15.csv"},
+            {"aidd", "aidd.csv"}, {"ai128", "ai128.csv"}, {"aidec", "aidec.csv"}};
         for (String[] c : cases) {
             Path report = dir.resolve("clean-" + c[1]);
             CliRunner.Result r = audit(c[0], out.resolve(c[1]), "--report", report.toString());
