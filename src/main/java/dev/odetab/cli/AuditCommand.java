@@ -27,9 +27,10 @@ import picocli.CommandLine.Parameters;
 
 /** {@code odetab audit SPEC#TABLE FILE}: measure an existing table against the exact values. */
 @Command(name = "audit", mixinStandardHelpOptions = true,
-        description = {"Compare an existing table (CSV, or a C or Java array literal) with the exact values of a spec table,",
-            "entry by entry in units in the last place; print a summary and write a report (audit.csv, summary.json,",
-            "error.png, error.svg). Exit 1 when an entry is off by more than the tolerance, 2 for unreadable input."})
+        description = {"Measure how far each entry of an existing table (CSV, or a C or Java array) is from the exact value.",
+            "Errors are in units in the last place of the spec table's format; a summary is printed and a report written",
+            "(audit.csv, summary.json, error.png, error.svg). Exit 1 when an entry is off by more than the tolerance,",
+            "2 for unreadable input."})
 final class AuditCommand implements Callable<Integer> {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
