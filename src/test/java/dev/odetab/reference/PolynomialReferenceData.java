@@ -22,8 +22,9 @@ import org.apache.commons.math3.fraction.BigFraction;
  * P_n^(α,β)(1)), each row naming its DLMF equation.</li>
  * <li>{@code reference-data/orthogonal-polynomials-commons-math3-3.6.1.csv}: P_n, T_n, H_n, L_n
  * at x = 1/2, 3/4, −5/8, n = 0 … 12, from the coefficients of commons-math3 3.6.1
- * {@code PolynomialsUtils.create…Polynomial(n)}. Legendre, Chebyshev and Hermite coefficients
- * are checked to be dyadic fractions (so the doubles are the exact coefficients). The Laguerre
+ * {@code PolynomialsUtils.create…Polynomial(n)}. Chebyshev and Hermite coefficients are checked
+ * to be integers below 2^53, Legendre coefficients k/2^n with |k| < 2^53 (so the doubles are the
+ * exact coefficients). The Laguerre
  * coefficients are k/n!, which doubles cannot hold; each is recovered as the fraction k/n!
  * nearest to commons-math's double, and the generator insists that this double is exactly
  * the double nearest to k/n!.</li>
@@ -155,11 +156,19 @@ public final class PolynomialReferenceData {
         return pq.length == 1 ? new BigFraction(new BigInteger(pq[0])) : new BigFraction(new BigInteger(pq[0]), new BigInteger(pq[1]));
     }
 
-    /** A dyadic double's exact value; fails if the coefficient is not an integer or a dyadic fraction of modest size. */
-    static BigFraction dyadic(double c, String what) {
+    /**
+     * A coefficient that must be k/2^e with |k| < 2^53 (e = n for Legendre, whose 2^n P_n has integer
+     * coefficients; e = 0 for Chebyshev and Hermite): then the double is that fraction exactly. Every
+     * double is some dyadic fraction, so the bound on the denominator is what makes this a check.
+     */
+    static BigFraction dyadic(double c, int e, String what) {
+        if (c == 0) {
+            return BigFraction.ZERO;
+        }
         BigFraction f = new BigFraction(c);
-        if (f.getDenominator().bitCount() != 1 || Math.abs(c) >= 0x1p53) {
-            throw new IllegalStateException(what + ": coefficient " + c + " is not a dyadic fraction held exactly");
+        BigInteger k = f.multiply(BigInteger.TWO.pow(e)).getNumerator();
+        if (f.getDenominator().bitLength() - 1 > e || k.abs().bitLength() > 53) {
+            throw new IllegalStateException(what + ": coefficient " + c + " is not k/2^" + e + " with |k| < 2^53");
         }
         return f;
     }
@@ -188,8 +197,8 @@ public final class PolynomialReferenceData {
         sb.append("# Legendre P_n, Chebyshev T_n, Hermite H_n (physicists') and Laguerre L_n at x = 1/2, 3/4, -5/8, n = 0..12.\n");
         sb.append("# source: commons-math3 3.6.1, PolynomialsUtils.createLegendrePolynomial, createChebyshevPolynomial,\n");
         sb.append("# createHermitePolynomial, createLaguerrePolynomial (getCoefficients()), evaluated exactly by\n");
-        sb.append("# src/test/java/dev/odetab/reference/PolynomialReferenceData.java. P, T, H coefficients are dyadic doubles\n");
-        sb.append("# (checked), hence exact; L_n coefficients are recovered as the k/n! whose nearest double commons-math returns.\n");
+        sb.append("# src/test/java/dev/odetab/reference/PolynomialReferenceData.java. T, H coefficients are integers, P_n ones k/2^n,\n");
+        sb.append("# |k| < 2^53 (checked), hence exact; L_n coefficients are recovered as the k/n! whose nearest double commons-math returns.\n");
         sb.append("# Terminating values are exact; the Laguerre values are rounded to 40 significant digits.\n");
         sb.append("function,parameters,x,quantity,value,source\n");
         String[] xs = {"0.5", "0.75", "-0.625"};
@@ -206,7 +215,7 @@ public final class PolynomialReferenceData {
                 BigFraction[] exact = new BigFraction[c.length];
                 for (int j = 0; j < c.length; j++) {
                     String what = family + " n=" + n + " x^" + j;
-                    exact[j] = family.equals("laguerre-l") ? overFactorial(c[j], n, what) : dyadic(c[j], what);
+                    exact[j] = family.equals("laguerre-l") ? overFactorial(c[j], n, what) : dyadic(c[j], family.equals("legendre-p") ? n : 0, what);
                 }
                 for (String x : xs) {
                     sb.append(row(family, "n=" + n, x, evaluate(exact, new BigFraction(new BigDecimal(x).doubleValue())), COMMONS_SOURCE));
