@@ -75,7 +75,7 @@ public final class ReferenceCheck {
     private static Outcome file(Path f) throws IOException, DataError {
         List<String> lines = Files.readAllLines(f, StandardCharsets.UTF_8);
         Map<String, List<Row>> groups = new java.util.LinkedHashMap<>();
-        String source = "";
+        java.util.Set<String> sources = new java.util.LinkedHashSet<>();
         for (int ln = 0; ln < lines.size(); ln++) {
             String line = lines.get(ln);
             if (line.startsWith("#") || line.startsWith("function,") || line.isBlank()) {
@@ -95,7 +95,7 @@ public final class ReferenceCheck {
             } catch (NumberFormatException e) {
                 throw new DataError(where + ": " + e.getMessage());
             }
-            source = c[5];
+            sources.add(c[5]);
         }
         List<String> failures = new ArrayList<>();
         double worst = 0;
@@ -135,7 +135,8 @@ public final class ReferenceCheck {
                 prec *= 2;
             }
         }
-        return new Outcome(f.getFileName().toString(), source, count, failures, worst);
+        // one source per file; where rows cite different equations of it, all are named
+        return new Outcome(f.getFileName().toString(), String.join("; ", sources), count, failures, worst);
     }
 
     private static FunctionDef define(String name, String params, String where) throws DataError {
@@ -208,9 +209,69 @@ public final class ReferenceCheck {
                 }
             }
             r.add(new Outcome("identity x psi_n = sqrt((n+1)/2) psi_n+1 + sqrt(n/2) psi_n-1", "DLMF 18.9.1 (orthonormal form)", count, fails, 0));
+
+            // DLMF 18.9.1 (Table 18.9.1), three-term recurrences written as a_n p_(n+1) = (b_n + c_n x) p_n − d_n p_(n−1).
+            r.add(recurrence("legendre-p", "(n+1) P_n+1 = (2n+1) x P_n - n P_n-1", new String[] {"-0.7", "1/3", "0.9"},
+                    (n, x) -> new Rational[] {Rational.of(n + 1), x.multiply(Rational.of(2 * n + 1)), Rational.of(n)}, p));
+            r.add(recurrence("chebyshev-t", "T_n+1 = 2x T_n - T_n-1", new String[] {"-0.7", "1/3", "0.9"},
+                    (n, x) -> new Rational[] {Rational.ONE, x.multiply(Rational.of(2)), Rational.ONE}, p));
+            r.add(recurrence("hermite-h", "H_n+1 = 2x H_n - 2n H_n-1", new String[] {"-2.5", "1/3", "3"},
+                    (n, x) -> new Rational[] {Rational.ONE, x.multiply(Rational.of(2)), Rational.of(2L * n)}, p));
+            r.add(recurrence("laguerre-l", "(n+1) L_n+1 = (2n+1-x) L_n - n L_n-1", new String[] {"0.5", "3", "10.25"},
+                    (n, x) -> new Rational[] {Rational.of(n + 1), Rational.of(2 * n + 1).subtract(x), Rational.of(n)}, p));
+
+            // DLMF 14.2.4 with mu = 0: W{P_n, Q_n} = P_n Q_n' − P_n' Q_n = 1/(1 − x²) on −1 < x < 1.
+            fails = new ArrayList<>();
+            count = 0;
+            for (int n : new int[] {0, 3, 10}) {
+                FunctionDef pn = Catalog.lookup("legendre-p").orElseThrow().define(Map.of("n", Rational.of(n)));
+                FunctionDef qn = Catalog.lookup("legendre-q").orElseThrow().define(Map.of("n", Rational.of(n)));
+                for (String s : new String[] {"-0.5", "1/3", "0.875"}) {
+                    Rational x = Rational.parse(s);
+                    Jet a = FunctionEvaluator.enclose(pn, x, p).jet();
+                    Jet b = FunctionEvaluator.enclose(qn, x, p).jet();
+                    Ball w = a.value().multiply(b.derivative(), p).subtract(a.derivative().multiply(b.value(), p), p);
+                    Rational expected = Rational.ONE.divide(Rational.ONE.subtract(x.multiply(x)));
+                    count++;
+                    if (!w.contains(expected)) {
+                        fails.add("W{P_" + n + ", Q_" + n + "}(" + s + ") = " + w + " does not contain 1/(1-x^2) = " + expected.toDecimalOrFraction());
+                    }
+                }
+            }
+            r.add(new Outcome("identity W{P_n, Q_n} = 1/(1-x^2)", "DLMF 14.2.4 (mu = 0)", count, fails, 0));
         } catch (ExprException | ParameterException e) {
             throw new DataError("identity check: " + e.getMessage());
         }
         return r;
+    }
+
+    /** The coefficients (a_n, b_n + c_n x, d_n) of a three-term recurrence at degree n and point x. */
+    private interface Recurrence {
+        Rational[] at(int n, Rational x);
+    }
+
+    /** a_n p_(n+1)(x) = (b_n + c_n x) p_n(x) − d_n p_(n−1)(x) at n = 5 and 20, both sides enclosed. */
+    private static Outcome recurrence(String family, String formula, String[] xs, Recurrence coefficients, int p)
+            throws ExprException, ParameterException {
+        Family f = Catalog.lookup(family).orElseThrow();
+        List<String> fails = new ArrayList<>();
+        int count = 0;
+        for (int n : new int[] {5, 20}) {
+            FunctionDef lo = f.define(Map.of("n", Rational.of(n - 1)));
+            FunctionDef mid = f.define(Map.of("n", Rational.of(n)));
+            FunctionDef hi = f.define(Map.of("n", Rational.of(n + 1)));
+            for (String s : xs) {
+                Rational x = Rational.parse(s);
+                Rational[] c = coefficients.at(n, x);
+                Ball left = FunctionEvaluator.enclose(hi, x, p).jet().value().multiply(c[0], p);
+                Ball right = FunctionEvaluator.enclose(mid, x, p).jet().value().multiply(c[1], p)
+                        .subtract(FunctionEvaluator.enclose(lo, x, p).jet().value().multiply(c[2], p), p);
+                count++;
+                if (!left.overlaps(right)) {
+                    fails.add(family + " n = " + n + ", x = " + s + ": " + left + " but the recurrence gives " + right);
+                }
+            }
+        }
+        return new Outcome("identity " + formula, "DLMF 18.9.1", count, fails, 0);
     }
 }

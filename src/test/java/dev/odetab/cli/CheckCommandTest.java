@@ -20,6 +20,39 @@ class CheckCommandTest {
     }
 
     @Test
+    void orthogonalPolynomialSourcesAndIdentitiesPass() {
+        CliRunner.Result r = CliRunner.run("check");
+        assertEquals(0, r.code(), r.out() + r.err());
+        for (String line : new String[] {
+            "PASS  orthogonal-polynomials-closed-forms.csv  (DLMF 14.5.1; DLMF 18.6.1; DLMF 18.5.13; "
+                    + "DLMF 18.5.13 with He_n(x) = 2^(-n/2) H_n(x/sqrt 2); DLMF 18.5.1): 243 values",
+            "PASS  orthogonal-polynomials-commons-math3-3.6.1.csv  (commons-math3 3.6.1): 156 values",
+            "PASS  identity (n+1) P_n+1 = (2n+1) x P_n - n P_n-1  (DLMF 18.9.1): 6 values",
+            "PASS  identity T_n+1 = 2x T_n - T_n-1  (DLMF 18.9.1): 6 values",
+            "PASS  identity H_n+1 = 2x H_n - 2n H_n-1  (DLMF 18.9.1): 6 values",
+            "PASS  identity (n+1) L_n+1 = (2n+1-x) L_n - n L_n-1  (DLMF 18.9.1): 6 values",
+            "PASS  identity W{P_n, Q_n} = 1/(1-x^2)  (DLMF 14.2.4 (mu = 0)): 9 values",
+        }) {
+            assertTrue(r.out().contains(line + "\n") || r.out().contains(line + ", worst"), line + "\n" + r.out());
+        }
+        assertTrue(r.out().endsWith("odetab check: all 12 sources pass\n"), r.out());
+    }
+
+    @Test
+    void aWrongPolynomialValueFails(@TempDir Path dir) throws Exception {
+        // P_4(0) = 3/8 (DLMF 14.5.1), written exactly with 40 digits, then the last digit changed by 1: an exact
+        // reference must agree within half a unit of its last digit, so this fails.
+        Files.writeString(dir.resolve("planted.csv"), "function,parameters,x,quantity,value,source\n"
+                + "legendre-p,n=4,0,value,0.3750000000000000000000000000000000000000,DLMF 14.5.1\n"
+                + "legendre-p,n=4,0,value,0.3750000000000000000000000000000000000001,planted error\n");
+        CliRunner.Result r = CliRunner.run("check", "--data", dir.toString());
+        assertEquals(1, r.code(), r.out() + r.err());
+        assertTrue(r.out().contains("FAIL  planted.csv  (DLMF 14.5.1; planted error): 2 values"), r.out());
+        assertTrue(r.out().contains("planted.csv:3: legendre-p (n=4) value at x = 0: reference 0.3750000000000000000000000000000000000001"), r.out());
+        assertTrue(!r.out().contains("planted.csv:2:"), r.out());
+    }
+
+    @Test
     void aWrongDigitFails(@TempDir Path dir) throws Exception {
         // Ai(1) = 0.13529241631288141552 (from memory, confirmed by the shipped data); the last digit changed by 2.
         Files.writeString(dir.resolve("planted.csv"), "function,parameters,x,quantity,value,source\n"
