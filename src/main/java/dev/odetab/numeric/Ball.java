@@ -105,10 +105,12 @@ public record Ball(BigDecimal mid, BigDecimal rad) {
         return new Ball(mid.negate(), rad);
     }
 
+    /** Rigorous: the sum; the midpoint's rounding error is computed exactly and joins the radius. */
     public Ball add(Ball o, int precBits) {
         return rounded(mid.add(o.mid), rad.add(o.rad), precBits);
     }
 
+    /** Rigorous: the difference; the midpoint's rounding error is computed exactly and joins the radius. */
     public Ball subtract(Ball o, int precBits) {
         return rounded(mid.subtract(o.mid), rad.add(o.rad), precBits);
     }
@@ -190,6 +192,7 @@ public record Ball(BigDecimal mid, BigDecimal rad) {
         return divide(of(q, precBits), precBits);
     }
 
+    /** Rigorous: the square, as the product of the ball with itself (an overestimate when the ball contains 0). */
     public Ball square(int precBits) {
         return multiply(this, precBits);
     }

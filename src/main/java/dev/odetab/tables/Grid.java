@@ -117,6 +117,7 @@ public sealed interface Grid {
             return c == null ? null : mid().add(half().multiply(c));
         }
 
+        /** Rigorous: a ball containing node i (exact for Niven nodes; otherwise π and cos as proven balls). */
         @Override
         public Ball node(int i, int precBits) {
             Rational exact = exactPoint(i);

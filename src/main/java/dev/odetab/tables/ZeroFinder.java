@@ -44,6 +44,7 @@ final class ZeroFinder {
     private record Bracket(Rational a, Rational b, Rational exact) {
     }
 
+    /** Rigorous: the zeros met walking the search interval, each row correctly rounded (class comment). */
     static TableResult find(TableDef t, Grid.ZeroSearch z) throws ExprException, TableEvaluator.UndecidedException,
             TableEvaluator.OutOfRangeException {
         FunctionDef f = t.function();
