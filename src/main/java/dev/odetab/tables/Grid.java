@@ -28,7 +28,7 @@ public sealed interface Grid {
 
     /** A ball containing point i (exact points give exact balls). */
     default Ball node(int i, int precBits) {
-        return Ball.of(points().get(i), precBits);
+        return Ball.of(exactPoint(i), precBits);
     }
 
     /** True when some point is irrational: the table then holds the correctly rounded node. */
@@ -49,6 +49,16 @@ public sealed interface Grid {
                 r.add(from.add(step.multiply(Rational.of(i))));
             }
             return r;
+        }
+
+        @Override
+        public Rational exactPoint(int i) {
+            return from.add(step.multiply(Rational.of(i)));
+        }
+
+        @Override
+        public int size() {
+            return count();
         }
 
         /** Number of points: (to − from)/step + 1. */
@@ -192,6 +202,11 @@ public sealed interface Grid {
     record Points(List<Rational> points) implements Grid {
         public Points {
             points = List.copyOf(points);
+        }
+
+        @Override
+        public Rational exactPoint(int i) {
+            return points.get(i);
         }
 
         @Override
