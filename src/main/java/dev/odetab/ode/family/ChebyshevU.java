@@ -27,12 +27,12 @@ public final class ChebyshevU implements Family {
 
     @Override
     public List<Parameter> parameters() {
-        return List.of(new Parameter("n", "degree", "an integer 0 <= n <= " + Degrees.MAX_DEGREE));
+        return List.of(Degrees.DEGREE);
     }
 
     @Override
     public FunctionDef define(Map<String, Rational> values) throws ParameterException {
-        int n = Degrees.integer("n", values.get("n"), 0, Degrees.MAX_DEGREE);
+        int n = Degrees.degree(values);
         Equation eq = new Equation(Poly.of(Rational.ONE, Rational.ZERO, Rational.of(-1)), Poly.of(Rational.ZERO, Rational.of(-3)),
                 Poly.constant(Rational.of((long) n * (n + 2))));
         Rational value = n % 2 == 0 ? Rational.of(Degrees.sign(n / 2)) : Rational.ZERO;

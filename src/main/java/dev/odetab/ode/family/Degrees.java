@@ -10,6 +10,14 @@ final class Degrees {
     private Degrees() {
     }
 
+    /** The degree parameter shared by the polynomial families. */
+    static final Family.Parameter DEGREE = new Family.Parameter("n", "degree", "an integer 0 <= n <= " + MAX_DEGREE);
+
+    /** The degree n from the parameter values, checked against 0 <= n <= MAX_DEGREE. */
+    static int degree(java.util.Map<String, Rational> values) throws ParameterException {
+        return integer("n", values.get("n"), 0, MAX_DEGREE);
+    }
+
     static int integer(String name, Rational value, int min, int max) throws ParameterException {
         if (value == null) {
             throw new ParameterException(name, "missing parameter " + name + " (an integer " + min + " <= " + name + " <= " + max + ")");

@@ -31,13 +31,13 @@ public final class GegenbauerC implements Family {
 
     @Override
     public List<Parameter> parameters() {
-        return List.of(new Parameter("n", "degree", "an integer 0 <= n <= " + Degrees.MAX_DEGREE),
+        return List.of(Degrees.DEGREE,
                 new Parameter("lambda", "order", LAMBDA_RANGE));
     }
 
     @Override
     public FunctionDef define(Map<String, Rational> values) throws ParameterException {
-        int n = Degrees.integer("n", values.get("n"), 0, Degrees.MAX_DEGREE);
+        int n = Degrees.degree(values);
         Rational lambda = Degrees.above("lambda", values.get("lambda"), Rational.of(-1, 2), MAX_LAMBDA, null, LAMBDA_RANGE);
         if (lambda.isZero()) {
             throw new ParameterException("lambda", "lambda = 0 is outside the allowed range: " + LAMBDA_RANGE);

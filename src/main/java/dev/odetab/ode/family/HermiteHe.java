@@ -27,12 +27,12 @@ public final class HermiteHe implements Family {
 
     @Override
     public List<Parameter> parameters() {
-        return List.of(new Parameter("n", "degree", "an integer 0 <= n <= " + Degrees.MAX_DEGREE));
+        return List.of(Degrees.DEGREE);
     }
 
     @Override
     public FunctionDef define(Map<String, Rational> values) throws ParameterException {
-        int n = Degrees.integer("n", values.get("n"), 0, Degrees.MAX_DEGREE);
+        int n = Degrees.degree(values);
         Equation eq = new Equation(Poly.ONE, Poly.of(Rational.ZERO, Rational.of(-1)), Poly.constant(Rational.of(n)));
         Rational slope = n == 0 ? Rational.ZERO : atZero(n - 1).multiply(n);
         return new FunctionDef(name(), eq, Rational.ZERO, Normalizations.exact(atZero(n)), Normalizations.exact(slope),

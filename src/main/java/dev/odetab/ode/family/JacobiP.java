@@ -31,13 +31,13 @@ public final class JacobiP implements Family {
 
     @Override
     public List<Parameter> parameters() {
-        return List.of(new Parameter("n", "degree", "an integer 0 <= n <= " + Degrees.MAX_DEGREE),
+        return List.of(Degrees.DEGREE,
                 new Parameter("alpha", "first parameter", ALPHA_RANGE), new Parameter("beta", "second parameter", BETA_RANGE));
     }
 
     @Override
     public FunctionDef define(Map<String, Rational> values) throws ParameterException {
-        int n = Degrees.integer("n", values.get("n"), 0, Degrees.MAX_DEGREE);
+        int n = Degrees.degree(values);
         Rational alpha = Degrees.above("alpha", values.get("alpha"), Rational.of(-1), MAX_PARAMETER, null, ALPHA_RANGE);
         Rational beta = Degrees.above("beta", values.get("beta"), Rational.of(-1), MAX_PARAMETER, null, BETA_RANGE);
         Rational ab1 = alpha.add(beta).add(Rational.ONE);

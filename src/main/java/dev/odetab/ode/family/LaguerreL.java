@@ -30,13 +30,13 @@ public final class LaguerreL implements Family {
 
     @Override
     public List<Parameter> parameters() {
-        return List.of(new Parameter("n", "degree", "an integer 0 <= n <= " + Degrees.MAX_DEGREE),
+        return List.of(Degrees.DEGREE,
                 new Parameter("alpha", "optional, default 0", ALPHA_RANGE));
     }
 
     @Override
     public FunctionDef define(Map<String, Rational> values) throws ParameterException {
-        int n = Degrees.integer("n", values.get("n"), 0, Degrees.MAX_DEGREE);
+        int n = Degrees.degree(values);
         Rational alpha = Degrees.above("alpha", values.get("alpha"), Rational.of(-1), MAX_ALPHA, Rational.ZERO, ALPHA_RANGE);
         Equation eq = new Equation(Poly.X, Poly.of(alpha.add(Rational.ONE), Rational.of(-1)), Poly.constant(Rational.of(n)));
         // t_n = 1/n!, and t_(ℓ−1) = t_ℓ (α + ℓ) ℓ / (n − ℓ + 1)

@@ -27,12 +27,12 @@ public final class LegendreP implements Family {
 
     @Override
     public List<Parameter> parameters() {
-        return List.of(new Parameter("n", "degree", "an integer 0 <= n <= " + Degrees.MAX_DEGREE));
+        return List.of(Degrees.DEGREE);
     }
 
     @Override
     public FunctionDef define(Map<String, Rational> values) throws ParameterException {
-        int n = Degrees.integer("n", values.get("n"), 0, Degrees.MAX_DEGREE);
+        int n = Degrees.degree(values);
         Rational slope = n == 0 ? Rational.ZERO : atZero(n - 1).multiply(n);
         return new FunctionDef(name(), equation(n), Rational.ZERO, Normalizations.exact(atZero(n)), Normalizations.exact(slope),
                 Map.of("n", Rational.of(n)), "DLMF 14.2.1, 14.5.1, 14.5.2, 18.3, 18.8 (Table 18.8.1)");

@@ -31,12 +31,12 @@ public final class LegendreQ implements Family {
 
     @Override
     public List<Parameter> parameters() {
-        return List.of(new Parameter("n", "degree", "an integer 0 <= n <= " + Degrees.MAX_DEGREE));
+        return List.of(Degrees.DEGREE);
     }
 
     @Override
     public FunctionDef define(Map<String, Rational> values) throws ParameterException {
-        int n = Degrees.integer("n", values.get("n"), 0, Degrees.MAX_DEGREE);
+        int n = Degrees.degree(values);
         int k = n / 2;
         Rational value = Rational.ZERO;
         Rational slope = Rational.ZERO;
