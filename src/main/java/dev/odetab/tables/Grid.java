@@ -5,8 +5,10 @@ import dev.odetab.numeric.BallFunctions;
 import dev.odetab.numeric.Rational;
 import java.math.BigDecimal;
 import java.math.MathContext;
+import java.util.AbstractList;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Objects;
 
 /** The points of a table; a grid never goes through a binary double. */
 public sealed interface Grid {
@@ -41,14 +43,22 @@ public sealed interface Grid {
 
     /** from, from + step, …, to; step divides to − from exactly (checked by the spec reader). */
     record Uniform(Rational from, Rational to, Rational step) implements Grid {
+        /** The points as a list that computes each one when read (a long grid is never held in memory). */
         @Override
         public List<Rational> points() {
             int n = count();
-            List<Rational> r = new ArrayList<>(n);
-            for (int i = 0; i < n; i++) {
-                r.add(from.add(step.multiply(Rational.of(i))));
-            }
-            return r;
+            return new AbstractList<>() {
+                @Override
+                public Rational get(int i) {
+                    Objects.checkIndex(i, n);
+                    return exactPoint(i);
+                }
+
+                @Override
+                public int size() {
+                    return n;
+                }
+            };
         }
 
         @Override

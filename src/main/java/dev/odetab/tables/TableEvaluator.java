@@ -61,8 +61,21 @@ public final class TableEvaluator {
      * @throws OutOfRangeException when a fixed-point entry is out of range and the policy is "error"
      */
     public static TableResult evaluate(TableDef t) throws ExprException, UndecidedException, OutOfRangeException {
+        return evaluate(t, Progress.NONE);
+    }
+
+    /**
+     * Rigorous: as {@link #evaluate(TableDef)}, reporting each row to {@code progress} as it is
+     * decided (a zeros table reports its rows when the search ends: their number is not known
+     * before). Rows go to a {@link RowStore} in grid order as soon as every row before them is
+     * decided, so the result of a long table is not held in memory.
+     */
+    public static TableResult evaluate(TableDef t, Progress progress) throws ExprException, UndecidedException, OutOfRangeException {
         if (t.grid() instanceof Grid.ZeroSearch z) {
-            return ZeroFinder.find(t, z);
+            TableResult zeros = ZeroFinder.find(t, z);
+            progress.start(t.name(), zeros.rows().size());
+            progress.advance(zeros.rows().size());
+            return zeros;
         }
         List<Rational> xs = t.grid().points();
         int n = xs.size();
@@ -73,6 +86,9 @@ public final class TableEvaluator {
         Optional<Poly> poly = FunctionEvaluator.polynomial(t.function());
         Grid grid = t.grid();
         List<Integer> pending = new ArrayList<>();
+        RowStore store = RowStore.forTable(t);
+        int stored = 0;
+        progress.start(t.name(), n);
         for (int i = 0; i < n; i++) {
             if (poly.isPresent() && grid.exactPoint(i) != null) {
                 entries[i] = new Entry[cols.size()];
@@ -84,9 +100,11 @@ public final class TableEvaluator {
                     }
                     entries[i][c] = checked(t, xs.get(i), col, Rounding.round(v, t.format(), t.rounding(), t.outOfRange()));
                 }
+                progress.advance(1);
             } else {
                 pending.add(i);
             }
+            stored = store(store, grid, entries, stored);
         }
         int prec = startBits(t.format());
         while (!pending.isEmpty()) {
@@ -132,10 +150,12 @@ public final class TableEvaluator {
                     entries[i] = row;
                     maxRel = maxRel.max(rowRel);
                     maxPrec = Math.max(maxPrec, prec);
+                    progress.advance(1);
                 } else {
                     still.add(i);
                 }
             }
+            stored = store(store, grid, entries, stored);
             pending = still;
             if (!pending.isEmpty()) {
                 if (prec >= t.capBits()) {
@@ -144,11 +164,17 @@ public final class TableEvaluator {
                 prec = Math.min(t.capBits(), 2 * prec);
             }
         }
-        List<TableResult.Row> rows = new ArrayList<>(n);
-        for (int i = 0; i < n; i++) {
-            rows.add(new TableResult.Row(grid.exactPoint(i), Arrays.asList(entries[i])));
+        return new TableResult(t, store.finish(), maxRel, maxPrec);
+    }
+
+    /** Moves the rows decided so far, from row {@code from} on in grid order, into the store; returns the first row not there. */
+    private static int store(RowStore store, Grid grid, Entry[][] entries, int from) {
+        int i = from;
+        while (i < entries.length && entries[i] != null) {
+            store.append(new TableResult.Row(grid.exactPoint(i), Arrays.asList(entries[i])));
+            entries[i++] = null;
         }
-        return new TableResult(t, rows, maxRel, maxPrec);
+        return i;
     }
 
     /** Value and slope of an exact polynomial over a ball (Horner in ball arithmetic). */
