@@ -1,6 +1,5 @@
 package dev.odetab.cli;
 
-import dev.odetab.emit.OutputWriter;
 import dev.odetab.emit.Outputs;
 import dev.odetab.emit.Provenance;
 import dev.odetab.expr.ExprException;
@@ -12,10 +11,10 @@ import dev.odetab.tables.TableEvaluator;
 import dev.odetab.tables.TableResult;
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
@@ -56,6 +55,7 @@ final class BuildCommand implements Callable<Integer> {
     public Integer call() {
         PrintWriter outw = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
+        List<TableResult> results = new ArrayList<>();
         try {
             int n = jobs == null ? Runtime.getRuntime().availableProcessors() : jobs;
             if (n < 1) {
@@ -69,27 +69,28 @@ final class BuildCommand implements Callable<Integer> {
                 }
             }
             Path dir = out != null ? out : defaultOut(specs.get(0));
-            List<TableResult> results = evaluate(work, n, err);
-            Outputs outputs = new Outputs(ToolVersion.get());
-            for (int i = 0; i < work.size(); i++) {
-                Job j = work.get(i);
-                outputs.add(results.get(i), Provenance.of(j.spec().display(), j.spec().bytes(), results.get(i), ToolVersion.get()), j.spec().title());
-            }
-            Map<String, byte[]> files = outputs.files();
-            if (check) {
-                List<String> diff = OutputWriter.differences(dir, files);
-                for (String d : diff) {
-                    outw.println("odetab: would change " + dir.resolve(d.substring(0, d.indexOf(' '))) + d.substring(d.indexOf(' ')));
+            evaluate(work, n, err, results);
+            try (Outputs outputs = check ? Outputs.forChecking(dir, ToolVersion.get()) : Outputs.forWriting(dir, ToolVersion.get())) {
+                for (int i = 0; i < work.size(); i++) {
+                    Job j = work.get(i);
+                    outputs.add(results.get(i), Provenance.of(j.spec().display(), j.spec().bytes(), results.get(i), ToolVersion.get()),
+                            j.spec().title());
                 }
-                if (!diff.isEmpty()) {
-                    return Main.DIFFERENCE;
+                if (check) {
+                    List<String> diff = outputs.differences();
+                    for (String d : diff) {
+                        outw.println("odetab: would change " + dir.resolve(d.substring(0, d.indexOf(' '))) + d.substring(d.indexOf(' ')));
+                    }
+                    if (!diff.isEmpty()) {
+                        return Main.DIFFERENCE;
+                    }
+                    outw.println("odetab: " + outputs.count() + " files in " + dir + " are up to date");
+                    return Main.OK;
                 }
-                outw.println("odetab: " + files.size() + " files in " + dir + " are up to date");
+                outputs.commit();
+                outw.println("odetab: wrote " + outputs.count() + " files for " + work.size() + " table(s) to " + dir);
                 return Main.OK;
             }
-            OutputWriter.write(dir, files);
-            outw.println("odetab: wrote " + files.size() + " files for " + work.size() + " table(s) to " + dir);
-            return Main.OK;
         } catch (InputError e) {
             err.println("odetab: " + e.getMessage());
             return Main.BAD_INPUT;
@@ -108,7 +109,11 @@ final class BuildCommand implements Callable<Integer> {
         } catch (IOException e) {
             err.println("odetab: cannot write the outputs: " + e.getMessage());
             return Main.BAD_INPUT;
+        } catch (UncheckedIOException e) {
+            err.println("odetab: " + e.getMessage());
+            return Main.BAD_INPUT;
         } finally {
+            results.forEach(TableResult::close);
             outw.flush();
         }
     }
@@ -118,28 +123,31 @@ final class BuildCommand implements Callable<Integer> {
         return parent == null ? Path.of("out") : parent.resolve("out");
     }
 
-    /** Evaluates the tables, in parallel when asked; results come back in table order. */
-    private List<TableResult> evaluate(List<Job> work, int n, PrintWriter err) throws ExprException,
+    /**
+     * Evaluates the tables, in parallel when asked, adding the results to {@code results} in
+     * table order (so the caller releases them even when a later table fails).
+     */
+    private void evaluate(List<Job> work, int n, PrintWriter err, List<TableResult> results) throws ExprException,
             TableEvaluator.UndecidedException, TableEvaluator.OutOfRangeException {
-        List<TableResult> results = new ArrayList<>();
         ExecutorService pool = Executors.newFixedThreadPool(Math.max(1, Math.min(n, work.size())));
+        List<String> lines = new ArrayList<>();
         try {
             List<Future<TableResult>> futures = new ArrayList<>();
             for (Job j : work) {
                 futures.add(pool.submit(() -> TableEvaluator.evaluate(j.table())));
             }
-            for (int i = 0; i < futures.size(); i++) {
-                TableResult r = get(futures.get(i));
-                if (verbose) {
-                    err.println("odetab: table " + r.table().name() + ": " + r.rows().size() + " rows, working precision up to "
-                            + r.maxPrecBits() + " bits");
-                }
+            for (Future<TableResult> f : futures) {
+                TableResult r = get(f);
                 results.add(r);
+                lines.add("odetab: table " + r.table().name() + ": " + r.rows().size() + " rows, working precision up to "
+                        + r.maxPrecBits() + " bits");
             }
         } finally {
             pool.shutdownNow();
+            if (verbose) {
+                lines.forEach(err::println);
+            }
         }
-        return results;
     }
 
     private static TableResult get(Future<TableResult> f) throws ExprException, TableEvaluator.UndecidedException,

@@ -1,12 +1,17 @@
 package dev.odetab.emit;
 
+import com.univocity.parsers.common.TextWritingException;
 import com.univocity.parsers.csv.CsvWriter;
 import com.univocity.parsers.csv.CsvWriterSettings;
 import dev.odetab.numeric.Entry;
 import dev.odetab.numeric.Format;
 import dev.odetab.tables.Column;
 import dev.odetab.tables.TableResult;
-import java.io.StringWriter;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.io.OutputStreamWriter;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -22,7 +27,8 @@ final class CsvOutput {
     private CsvOutput() {
     }
 
-    static byte[] render(TableResult result) {
+    /** Writes the CSV into {@code out} (UTF-8) row by row, as the rows are read. */
+    static void render(TableResult result, OutputStream out) throws IOException {
         Format f = result.table().format();
         List<Column> cols = result.table().columns();
         List<String> header = new ArrayList<>();
@@ -35,8 +41,23 @@ final class CsvOutput {
         settings.getFormat().setDelimiter(',');
         settings.getFormat().setQuote('"');
         settings.setQuoteEscapingEnabled(true);
-        StringWriter out = new StringWriter();
-        CsvWriter w = new CsvWriter(out, settings);
+        Writer text = new OutputStreamWriter(out, StandardCharsets.UTF_8);
+        try {
+            write(result, header, flags, new CsvWriter(text, settings));
+        } catch (TextWritingException e) {
+            // univocity wraps a failure of the writer; a full disk is an I/O problem, not a bug
+            for (Throwable c = e.getCause(); c != null; c = c.getCause()) {
+                if (c instanceof IOException io) {
+                    throw io;
+                }
+            }
+            throw e;
+        }
+        text.flush();
+    }
+
+    private static void write(TableResult result, List<String> header, boolean flags, CsvWriter w) {
+        List<Column> cols = result.table().columns();
         w.writeHeaders(header);
         for (TableResult.Row row : result.rows()) {
             List<String> cells = new ArrayList<>();
@@ -52,8 +73,7 @@ final class CsvOutput {
             }
             w.writeRow(cells.toArray());
         }
-        w.close();
-        return out.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8);
+        w.flush();
     }
 
     /**

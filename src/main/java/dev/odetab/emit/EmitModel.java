@@ -51,13 +51,10 @@ final class EmitModel {
             for (int p = 0; p < parts.size(); p++) {
                 Literals.Part part = parts.get(p);
                 String name = col.name() + part.suffix();
-                List<String> cLits = new ArrayList<>(result.rows().size());
-                List<String> javaLits = new ArrayList<>(result.rows().size());
-                for (TableResult.Row row : result.rows()) {
-                    Entry e = row.entries().get(c);
-                    cLits.add(Literals.c(e, p));
-                    javaLits.add(Literals.java(e, p));
-                }
+                int column = c;
+                int index = p;
+                List<String> cLits = new LiteralList(result.rows(), row -> Literals.c(row.entries().get(column), index));
+                List<String> javaLits = new LiteralList(result.rows(), row -> Literals.java(row.entries().get(column), index));
                 Map<String, Object> cm = new LinkedHashMap<>();
                 cm.put("name", name);
                 cm.put("macro", name.toUpperCase(Locale.ROOT));

@@ -1,6 +1,7 @@
 package dev.odetab.emit;
 
 import java.io.IOException;
+import java.io.InputStream;
 import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
@@ -9,6 +10,7 @@ import java.nio.file.StandardCopyOption;
 import java.security.SecureRandom;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
@@ -19,22 +21,45 @@ import java.util.Map;
  */
 public final class OutputWriter {
     private static final SecureRandom RANDOM = new SecureRandom();
+    private static final int CHUNK = 1 << 16;
 
     private OutputWriter() {
     }
 
-    /** Files that differ from what would be written (for {@code --check}), sorted by name. */
-    public static List<String> differences(Path dir, Map<String, byte[]> files) throws IOException {
+    /**
+     * Files that differ from their staged versions (for {@code --check}): {@code NAME (missing)}
+     * or {@code NAME (differs)}, in the order of {@code staged}. Both are read in chunks, never
+     * whole.
+     */
+    public static List<String> differences(Path dir, Map<String, Path> staged) throws IOException {
         List<String> diff = new ArrayList<>();
-        for (Map.Entry<String, byte[]> e : files.entrySet()) {
+        for (Map.Entry<String, Path> e : staged.entrySet()) {
             Path p = dir.resolve(e.getKey());
             if (!Files.isRegularFile(p)) {
                 diff.add(e.getKey() + " (missing)");
-            } else if (!Arrays.equals(Files.readAllBytes(p), e.getValue())) {
+            } else if (!sameBytes(p, e.getValue())) {
                 diff.add(e.getKey() + " (differs)");
             }
         }
         return diff;
+    }
+
+    private static boolean sameBytes(Path a, Path b) throws IOException {
+        if (Files.size(a) != Files.size(b)) {
+            return false;
+        }
+        try (InputStream x = Files.newInputStream(a); InputStream y = Files.newInputStream(b)) {
+            while (true) {
+                byte[] u = x.readNBytes(CHUNK);
+                byte[] v = y.readNBytes(CHUNK);
+                if (!Arrays.equals(u, v)) {
+                    return false;
+                }
+                if (u.length < CHUNK) {
+                    return true;
+                }
+            }
+        }
     }
 
     /**
@@ -42,7 +67,7 @@ public final class OutputWriter {
      * which makes it readable by its owner only, it gets the permissions of any new file (the
      * umask applies), which the output keeps after the rename.
      */
-    private static Path createTemporary(Path dir) throws IOException {
+    static Path createTemporary(Path dir) throws IOException {
         while (true) {
             Path tmp = dir.resolve(".odetab-" + Long.toUnsignedString(RANDOM.nextLong()) + ".tmp");
             try {
@@ -56,28 +81,37 @@ public final class OutputWriter {
     /** Writes every file into {@code dir} (created when missing). */
     public static void write(Path dir, Map<String, byte[]> files) throws IOException {
         Files.createDirectories(dir);
-        List<Path[]> moves = new ArrayList<>();
+        Map<String, Path> staged = new LinkedHashMap<>();
         try {
             for (Map.Entry<String, byte[]> e : files.entrySet()) {
-                Path target = dir.resolve(e.getKey()).normalize();
-                if (!target.startsWith(dir.normalize())) {
-                    throw new IOException("refusing to write outside the output folder: " + e.getKey());
-                }
                 Path tmp = createTemporary(dir);
-                moves.add(new Path[] {tmp, target});
+                staged.put(e.getKey(), tmp);
                 Files.write(tmp, e.getValue());
             }
-        } catch (IOException | RuntimeException ex) {
-            for (Path[] m : moves) {
-                Files.deleteIfExists(m[0]);
+            commit(dir, staged);
+        } finally {
+            for (Path tmp : staged.values()) {
+                Files.deleteIfExists(tmp);
             }
-            throw ex;
         }
-        for (Path[] m : moves) {
+    }
+
+    /**
+     * Renames each staged file (a temporary file in {@code dir}) over its target. Every name is
+     * checked first, so a name outside the folder moves nothing.
+     */
+    static void commit(Path dir, Map<String, Path> staged) throws IOException {
+        for (String name : staged.keySet()) {
+            if (!dir.resolve(name).normalize().startsWith(dir.normalize())) {
+                throw new IOException("refusing to write outside the output folder: " + name);
+            }
+        }
+        for (Map.Entry<String, Path> e : staged.entrySet()) {
+            Path target = dir.resolve(e.getKey()).normalize();
             try {
-                Files.move(m[0], m[1], StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(m[0], m[1], StandardCopyOption.REPLACE_EXISTING);
+                Files.move(e.getValue(), target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException x) {
+                Files.move(e.getValue(), target, StandardCopyOption.REPLACE_EXISTING);
             }
         }
     }

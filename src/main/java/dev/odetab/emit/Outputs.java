@@ -1,29 +1,72 @@
 package dev.odetab.emit;
 
 import dev.odetab.tables.TableResult;
+import java.io.BufferedOutputStream;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.security.DigestOutputStream;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.TreeMap;
+import java.util.stream.Stream;
 
 /**
- * Renders every output of a build into memory: file name (relative to the output folder) →
- * bytes, plus {@code manifest.json}. Nothing is written here; see {@link OutputWriter}.
+ * The outputs of one build, each rendered straight into a temporary file as it is produced
+ * (its SHA-256 computed on the way, for {@code manifest.json}), so that memory does not grow
+ * with the length of a table. {@link #commit} renames them all over their targets
+ * ({@link OutputWriter}); {@link #differences} compares them with the files on disk for
+ * {@code --check}; {@link #close} deletes whatever was not committed, so a build that fails
+ * at any point leaves every existing file as it was, and creates no output folder.
  */
-public final class Outputs {
+public final class Outputs implements AutoCloseable {
     public static final String MANIFEST = "manifest.json";
 
-    private final TreeMap<String, byte[]> files = new TreeMap<>();
-    private final List<Map<String, Object>> manifestEntries = new ArrayList<>();
+    private final Path dir;
+    private final Path staging;
+    private final List<Path> created;
     private final String toolVersion;
+    private final TreeMap<String, Path> files = new TreeMap<>();
+    private final List<Map<String, Object>> manifestEntries = new ArrayList<>();
+    private boolean manifestStaged;
 
-    public Outputs(String toolVersion) {
+    private Outputs(Path dir, Path staging, List<Path> created, String toolVersion) {
+        this.dir = dir;
+        this.staging = staging;
+        this.created = created;
         this.toolVersion = toolVersion;
+    }
+
+    /**
+     * Outputs to be written into {@code dir}: temporary files go there (so that the final
+     * renames stay on one file system); the folder is created when missing, and removed again
+     * by {@link #close} unless the outputs were committed.
+     */
+    public static Outputs forWriting(Path dir, String toolVersion) throws IOException {
+        List<Path> created = new ArrayList<>();
+        for (Path p = dir.toAbsolutePath().normalize(); p != null && !Files.exists(p); p = p.getParent()) {
+            created.add(p);
+        }
+        Files.createDirectories(dir);
+        return new Outputs(dir, dir, created, toolVersion);
+    }
+
+    /**
+     * Outputs to be compared with {@code dir} ({@code --check}): temporary files go to a fresh
+     * folder in {@code java.io.tmpdir}, so that checking needs no write access to {@code dir}
+     * and never touches it.
+     */
+    public static Outputs forChecking(Path dir, String toolVersion) throws IOException {
+        Path staging = Files.createTempDirectory("odetab-check-");
+        return new Outputs(dir, staging, List.of(staging), toolVersion);
     }
 
     /** A template problem (exit 2), located in the template. */
@@ -50,22 +93,29 @@ public final class Outputs {
         }
     }
 
+    /** Writes the bytes of one output. */
+    private interface Renderer {
+        void render(OutputStream out) throws IOException, TemplateEngine.TemplateProblem;
+    }
+
     /** Renders the outputs the table asks for. */
-    public void add(TableResult result, Provenance provenance, String specTitle) throws TemplateError, ClashError {
+    public void add(TableResult result, Provenance provenance, String specTitle) throws TemplateError, ClashError, IOException {
         Map<String, Object> model = EmitModel.of(result, provenance, specTitle);
         String name = result.table().name();
         for (String output : result.table().outputs()) {
             try {
                 switch (output) {
-                    case "csv" -> put(name + ".csv", CsvOutput.render(result), provenance);
+                    case "csv" -> stage(name + ".csv", provenance, out -> CsvOutput.render(result, out));
                     case "c" -> {
-                        put(name.toLowerCase(java.util.Locale.ROOT) + ".h", TemplateEngine.renderBuiltIn("c_header.ftl", model), provenance);
-                        put(name.toLowerCase(java.util.Locale.ROOT) + ".c", TemplateEngine.renderBuiltIn("c_source.ftl", model), provenance);
+                        String base = name.toLowerCase(Locale.ROOT);
+                        stage(base + ".h", provenance, out -> TemplateEngine.renderBuiltIn("c_header.ftl", model, out));
+                        stage(base + ".c", provenance, out -> TemplateEngine.renderBuiltIn("c_source.ftl", model, out));
                     }
-                    case "java" -> put(EmitModel.className(name) + ".java", TemplateEngine.renderBuiltIn("java.ftl", model), provenance);
+                    case "java" -> stage(EmitModel.className(name) + ".java", provenance,
+                            out -> TemplateEngine.renderBuiltIn("java.ftl", model, out));
                     default -> {
                         Path p = Path.of(output);
-                        put(userOutputName(name, p), TemplateEngine.renderFile(p, model), provenance);
+                        stage(userOutputName(name, p), provenance, out -> TemplateEngine.renderFile(p, model, out));
                     }
                 }
             } catch (TemplateEngine.TemplateProblem e) {
@@ -85,15 +135,14 @@ public final class Outputs {
         return dot > 0 ? table + base.substring(dot) : table + "." + base + ".txt";
     }
 
-    private void put(String file, byte[] bytes, Provenance p) throws ClashError {
+    private void stage(String file, Provenance p, Renderer renderer) throws ClashError, IOException, TemplateEngine.TemplateProblem {
         if (files.containsKey(file) || file.equals(MANIFEST)) {
             throw new ClashError("two outputs of this build would both be written to " + file
                     + " (table names must differ across the specs of one build)");
         }
-        files.put(file, bytes);
         Map<String, Object> entry = new LinkedHashMap<>();
         entry.put("path", file);
-        entry.put("sha256", sha256(bytes));
+        entry.put("sha256", stageBytes(file, renderer));
         Map<String, Object> prov = new LinkedHashMap<>();
         prov.put("spec", p.specPath());
         prov.put("spec_sha256", p.specSha256());
@@ -109,21 +158,80 @@ public final class Outputs {
         manifestEntries.add(entry);
     }
 
-    /** Every file, the manifest included, by name. */
-    public Map<String, byte[]> files() {
-        TreeMap<String, byte[]> all = new TreeMap<>(files);
+    /** Renders into a new temporary file registered under {@code file}; returns the SHA-256 of what was written. */
+    private String stageBytes(String file, Renderer renderer) throws IOException, TemplateEngine.TemplateProblem {
+        Path tmp = OutputWriter.createTemporary(staging);
+        files.put(file, tmp);
+        MessageDigest md = sha256();
+        try (OutputStream out = new BufferedOutputStream(new DigestOutputStream(Files.newOutputStream(tmp), md), 1 << 16)) {
+            renderer.render(out);
+        }
+        return HexFormat.of().formatHex(md.digest());
+    }
+
+    private void stageManifest() throws IOException {
+        if (manifestStaged) {
+            return;
+        }
+        manifestStaged = true;
         List<Map<String, Object>> sorted = new ArrayList<>(manifestEntries);
         sorted.sort((a, b) -> a.get("path").toString().compareTo(b.get("path").toString()));
         Map<String, Object> manifest = new LinkedHashMap<>();
         manifest.put("tool", "odetab " + toolVersion);
         manifest.put("files", sorted);
-        all.put(MANIFEST, Json.write(manifest).getBytes(java.nio.charset.StandardCharsets.UTF_8));
-        return all;
+        byte[] bytes = Json.write(manifest).getBytes(StandardCharsets.UTF_8);
+        try {
+            stageBytes(MANIFEST, out -> out.write(bytes));
+        } catch (TemplateEngine.TemplateProblem e) {
+            throw new IllegalStateException("the manifest has no template", e);
+        }
+    }
+
+    /** Number of files of the build, the manifest included. */
+    public int count() {
+        return manifestEntries.size() + 1;
+    }
+
+    /** Files on disk that differ from what this build would write, the manifest included ({@link OutputWriter#differences}). */
+    public List<String> differences() throws IOException {
+        stageManifest();
+        return OutputWriter.differences(dir, files);
+    }
+
+    /** Renames every file, the manifest included, over its target in the output folder. */
+    public void commit() throws IOException {
+        stageManifest();
+        OutputWriter.commit(dir, files);
+        files.clear();
+        created.clear();
+    }
+
+    /** Deletes every temporary file left, and the folders this build created unless it committed. */
+    @Override
+    public void close() throws IOException {
+        for (Path tmp : files.values()) {
+            Files.deleteIfExists(tmp);
+        }
+        files.clear();
+        for (Path p : created) {
+            if (Files.isDirectory(p)) {
+                try (Stream<Path> s = Files.list(p)) {
+                    if (s.findAny().isPresent()) {
+                        break;
+                    }
+                }
+                Files.delete(p);
+            }
+        }
     }
 
     public static String sha256(byte[] bytes) {
+        return HexFormat.of().formatHex(sha256().digest(bytes));
+    }
+
+    private static MessageDigest sha256() {
         try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
+            return MessageDigest.getInstance("SHA-256");
         } catch (NoSuchAlgorithmException e) {
             throw new IllegalStateException("SHA-256 is required of every Java platform", e);
         }

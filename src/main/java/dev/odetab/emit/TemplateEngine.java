@@ -10,7 +10,9 @@ import freemarker.template.Template;
 import freemarker.template.TemplateException;
 import freemarker.template.TemplateExceptionHandler;
 import java.io.IOException;
-import java.io.StringWriter;
+import java.io.OutputStream;
+import java.io.OutputStreamWriter;
+import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.Locale;
@@ -61,37 +63,46 @@ final class TemplateEngine {
         return cfg;
     }
 
-    /** Renders a built-in template ({@code c_header.ftl}, …) from the jar. */
-    static byte[] renderBuiltIn(String name, Map<String, Object> model) throws TemplateProblem {
-        return render(configuration(new ClassTemplateLoader(TemplateEngine.class, "/templates")), name, "templates/" + name, model);
+    /** Renders a built-in template ({@code c_header.ftl}, …) from the jar into {@code out} (UTF-8). */
+    static void renderBuiltIn(String name, Map<String, Object> model, OutputStream out) throws TemplateProblem, IOException {
+        render(configuration(new ClassTemplateLoader(TemplateEngine.class, "/templates")), name, "templates/" + name, model, out);
     }
 
-    /** Renders a user's template file. */
-    static byte[] renderFile(Path template, Map<String, Object> model) throws TemplateProblem {
+    /** Renders a user's template file into {@code out} (UTF-8). */
+    static void renderFile(Path template, Map<String, Object> model, OutputStream out) throws TemplateProblem, IOException {
+        Configuration cfg;
         try {
-            Path dir = template.toAbsolutePath().getParent();
-            return render(configuration(new FileTemplateLoader(dir.toFile())), template.getFileName().toString(),
-                    template.toString(), model);
+            cfg = configuration(new FileTemplateLoader(template.toAbsolutePath().getParent().toFile()));
         } catch (IOException e) {
             throw new TemplateProblem(template.toString(), "cannot read the template: " + e.getMessage());
         }
+        render(cfg, template.getFileName().toString(), template.toString(), model, out);
     }
 
-    private static byte[] render(Configuration cfg, String name, String display, Map<String, Object> model) throws TemplateProblem {
+    /**
+     * Writes the output as FreeMarker produces it, so nothing of it is held in memory; a
+     * failure to write {@code out} is an {@link IOException}, a failure to read or run the
+     * template a {@link TemplateProblem}.
+     */
+    private static void render(Configuration cfg, String name, String display, Map<String, Object> model, OutputStream out)
+            throws TemplateProblem, IOException {
+        Template t;
         try {
-            Template t = cfg.getTemplate(name);
-            StringWriter out = new StringWriter();
-            t.process(model, out);
-            return out.toString().getBytes(StandardCharsets.UTF_8);
+            t = cfg.getTemplate(name);
         } catch (freemarker.core.ParseException e) {
             throw new TemplateProblem(display + ":" + e.getLineNumber() + ":" + e.getColumnNumber(),
                     "template syntax: " + firstLine(e.getEditorMessage()));
-        } catch (TemplateException e) {
-            String where = e.getLineNumber() == null ? display : display + ":" + e.getLineNumber() + ":" + e.getColumnNumber();
-            throw new TemplateProblem(where, "template error: " + firstLine(e.getMessageWithoutStackTop()));
         } catch (IOException e) {
             throw new TemplateProblem(display, "cannot read the template: " + e.getMessage());
         }
+        Writer w = new OutputStreamWriter(out, StandardCharsets.UTF_8);
+        try {
+            t.process(model, w);
+        } catch (TemplateException e) {
+            String where = e.getLineNumber() == null ? display : display + ":" + e.getLineNumber() + ":" + e.getColumnNumber();
+            throw new TemplateProblem(where, "template error: " + firstLine(e.getMessageWithoutStackTop()));
+        }
+        w.flush();
     }
 
     private static String firstLine(String s) {

@@ -1,0 +1,106 @@
+package dev.odetab.emit;
+
+import dev.odetab.tables.TableResult;
+import java.util.AbstractSequentialList;
+import java.util.Iterator;
+import java.util.List;
+import java.util.ListIterator;
+import java.util.function.Function;
+
+/**
+ * The literals of one emitted array, formatted from the rows as they are read and never held,
+ * so a template's model does not grow with the table.
+ *
+ * <p>FreeMarker 2.3.34's object wrapper gives a template an {@link AbstractSequentialList}
+ * through its iterator ({@code DefaultListAdapterWithCollectionSupport}); any other list it
+ * reads by {@code size()} and {@code get(i)}, and a bare {@link Iterable} our locked-down
+ * wrapper refuses. So each {@code <#list>} (with or without {@code <#sep>}) is one streaming
+ * pass over the rows, and a template may list the same array any number of times;
+ * {@code col.c[i]} reads row i through the rows' own {@code get}.
+ */
+final class LiteralList extends AbstractSequentialList<String> {
+    private final List<TableResult.Row> rows;
+    private final Function<TableResult.Row, String> literal;
+
+    LiteralList(List<TableResult.Row> rows, Function<TableResult.Row, String> literal) {
+        this.rows = rows;
+        this.literal = literal;
+    }
+
+    @Override
+    public int size() {
+        return rows.size();
+    }
+
+    @Override
+    public String get(int i) {
+        return literal.apply(rows.get(i));
+    }
+
+    @Override
+    public Iterator<String> iterator() {
+        Iterator<TableResult.Row> it = rows.iterator();
+        return new Iterator<>() {
+            @Override
+            public boolean hasNext() {
+                return it.hasNext();
+            }
+
+            @Override
+            public String next() {
+                return literal.apply(it.next());
+            }
+        };
+    }
+
+    @Override
+    public ListIterator<String> listIterator(int start) {
+        ListIterator<TableResult.Row> it = rows.listIterator(start);
+        return new ListIterator<>() {
+            @Override
+            public boolean hasNext() {
+                return it.hasNext();
+            }
+
+            @Override
+            public String next() {
+                return literal.apply(it.next());
+            }
+
+            @Override
+            public boolean hasPrevious() {
+                return it.hasPrevious();
+            }
+
+            @Override
+            public String previous() {
+                return literal.apply(it.previous());
+            }
+
+            @Override
+            public int nextIndex() {
+                return it.nextIndex();
+            }
+
+            @Override
+            public int previousIndex() {
+                return it.previousIndex();
+            }
+
+            @Override
+            public void remove() {
+                throw new UnsupportedOperationException();
+            }
+
+            @Override
+            public void set(String s) {
+                throw new UnsupportedOperationException();
+            }
+
+            @Override
+            public void add(String s) {
+                throw new UnsupportedOperationException();
+            }
+        };
+    }
+}
