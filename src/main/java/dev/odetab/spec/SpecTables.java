@@ -30,6 +30,13 @@ final class SpecTables {
     static final Set<String> KINDS = new LinkedHashSet<>(List.of("values", "zeros", "quadrature", "taylor"));
     static final Set<String> BUILT_IN_OUTPUTS = new LinkedHashSet<>(List.of("csv", "c", "java"));
     static final int MAX_POINTS = 10_000_000;
+    /**
+     * Array entries one {@code java} output may hold. Its class initializer fills the arrays,
+     * and a method's code must be shorter than 65536 bytes (JVMS §4.7.3, code_length): javac
+     * spends up to 8 bytes per entry (dup, sipush index, ldc_w or ldc2_w constant, store) and
+     * about 8 per array, so 8000 entries stay below the limit with room for 130 arrays.
+     */
+    static final int MAX_JAVA_ENTRIES = 8000;
     static final int DEFAULT_CAP_BITS = 4096;
     static final int MAX_CAP_BITS = 1 << 20;
 
@@ -148,7 +155,7 @@ final class SpecTables {
                 }
             }
         }
-        List<String> outputs = outputs(base, t);
+        List<String> outputs = outputs(base, t, javaEntries(grid, columns, format));
         return new TableDef(name, fname, f, grid, columns, format, rounding, outOfRange, cap, outputs);
     }
 
@@ -396,7 +403,18 @@ final class SpecTables {
         return r;
     }
 
-    private List<String> outputs(List<String> base, TomlTable t) throws InputError {
+    /**
+     * The entries of a {@code java} output's arrays: rows × columns, twice that for binary128
+     * and double-double (two arrays per column); a zeros table counts its {@code count}, and
+     * 0 when that is not given (the number of zeros is known only after the search).
+     */
+    private static long javaEntries(Grid grid, List<Column> columns, Format format) {
+        long rows = grid instanceof Grid.ZeroSearch z ? z.count() : grid.size();
+        int arrays = format instanceof Format.DoubleDouble || format.equals(Format.BinaryFormat.BINARY128) ? 2 : 1;
+        return rows * columns.size() * arrays;
+    }
+
+    private List<String> outputs(List<String> base, TomlTable t, long javaEntries) throws InputError {
         if (!t.contains("outputs")) {
             return List.of("csv");
         }
@@ -411,6 +429,11 @@ final class SpecTables {
             String where = spec.display() + ":" + p.line() + ":" + p.column();
             if (!(v instanceof String s)) {
                 throw new InputError(where, "an output must be a template name (csv, c, java) or a path to a .ftl file");
+            }
+            if (s.equals("java") && javaEntries > MAX_JAVA_ENTRIES) {
+                throw new InputError(where, "a java output holds the whole table in one class, whose initializer the JVM limits to"
+                        + " 64 KiB of bytecode (JVMS 4.7.3): at most " + MAX_JAVA_ENTRIES + " array entries, and this table has "
+                        + javaEntries + "; use \"c\" or \"csv\" for it, or split it into smaller tables");
             }
             if (BUILT_IN_OUTPUTS.contains(s)) {
                 r.add(s);

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.odetab.cli.CliRunner;
 import dev.odetab.emit.EveryFormatBuild.Array;
 import java.io.File;
 import java.lang.reflect.Method;
@@ -70,6 +71,31 @@ class JavaCompileTest {
             }
         }
         assertTrue(checked > 200, "the spec should exercise many entries, checked " + checked);
+    }
+
+    /**
+     * The largest table a spec may send to a java output (8000 array entries, the limit of
+     * spec validation) compiles: javac keeps its class initializer under the 65536 bytes of
+     * code a method may have (JVMS 4.7.3). Entries 1 … 4000 and their P_2 values are distinct
+     * non-trivial doubles, each loaded by ldc2_w at an index needing sipush: the costliest case.
+     */
+    @Test
+    void theLargestTableAllowedInJavaCompiles(@TempDir Path tmp) throws Exception {
+        Path spec = tmp.resolve("limit.toml");
+        Files.writeString(spec, String.join("\n", "title = \"Quillmere Instruments: the longest Java table\"",
+                "[functions.p2]", "family = \"legendre-p\"", "n = 2", "[tables.limit]", "function = \"p2\"",
+                "grid = { from = \"1\", to = \"4000\", step = \"1\" }", "columns = [\"x\", \"value\"]", "outputs = [\"java\"]", ""));
+        Path out = tmp.resolve("out");
+        CliRunner.Result r = CliRunner.run("build", spec.toString(), "--out", out.toString());
+        assertEquals(0, r.code(), r.err());
+        JavaCompiler javac = ToolProvider.getSystemJavaCompiler();
+        DiagnosticCollector<JavaFileObject> diagnostics = new DiagnosticCollector<>();
+        try (StandardJavaFileManager fm = javac.getStandardFileManager(diagnostics, Locale.ROOT, StandardCharsets.UTF_8)) {
+            List<String> options = List.of("--release", "17", "-d", tmp.resolve("classes").toString());
+            boolean ok = javac.getTask(null, fm, diagnostics, options, null,
+                    fm.getJavaFileObjectsFromFiles(List.of(out.resolve("Limit.java").toFile()))).call();
+            assertTrue(ok, "javac rejects a table of 8000 entries: " + diagnostics.getDiagnostics());
+        }
     }
 
     private static String text(Array a, Object v) {

@@ -53,6 +53,10 @@ class MalformedSpecTest {
             Map.entry("precision-cap-too-small.toml", "4:1: precision_cap_bits must be an integer from 64 to 1048576"),
             Map.entry("unknown-template.toml",
                     "4:19: unknown template 'jav'; did you mean 'java'? (built-in: csv, c, java; or a path to a .ftl file)"),
+            // JVMS 4.7.3: a method's code_length is below 65536, and a java output's arrays are filled in one initializer
+            Map.entry("java-too-large.toml", "5:19: a java output holds the whole table in one class, whose initializer the JVM limits"
+                    + " to 64 KiB of bytecode (JVMS 4.7.3): at most 8000 array entries, and this table has 8002; use \"c\" or \"csv\""
+                    + " for it, or split it into smaller tables"),
             Map.entry("missing-template-file.toml", "4:19: template file 'no-such-dir/table.rs.ftl' does not exist (looked for "
                     + DIR + "no-such-dir/table.rs.ftl)"),
             Map.entry("unknown-function.toml", "7:1: unknown function 'wav'; did you mean 'wave'? (defined: wave)"),
