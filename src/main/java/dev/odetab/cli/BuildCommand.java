@@ -48,6 +48,9 @@ final class BuildCommand implements Callable<Integer> {
     @Option(names = "--verbose", description = "report the work done per table on stderr")
     boolean verbose;
 
+    @Option(names = "--quiet", description = "no progress bars (shown otherwise on stderr when it is a terminal, for phases longer than a second)")
+    boolean quiet;
+
     private record Job(SpecFile spec, TableDef table) {
     }
 
@@ -70,7 +73,9 @@ final class BuildCommand implements Callable<Integer> {
             }
             Path dir = out != null ? out : defaultOut(specs.get(0));
             evaluate(work, n, err, results);
-            try (Outputs outputs = check ? Outputs.forChecking(dir, ToolVersion.get()) : Outputs.forWriting(dir, ToolVersion.get())) {
+            try (ProgressDisplay writing = ProgressDisplay.forBuild("odetab: writing", "entries", quiet);
+                    Outputs outputs = check ? Outputs.forChecking(dir, ToolVersion.get(), writing)
+                            : Outputs.forWriting(dir, ToolVersion.get(), writing)) {
                 for (int i = 0; i < work.size(); i++) {
                     Job j = work.get(i);
                     outputs.add(results.get(i), Provenance.of(j.spec().display(), j.spec().bytes(), results.get(i), ToolVersion.get()),
@@ -78,6 +83,7 @@ final class BuildCommand implements Callable<Integer> {
                 }
                 if (check) {
                     List<String> diff = outputs.differences();
+                    writing.close();
                     for (String d : diff) {
                         outw.println("odetab: would change " + dir.resolve(d.substring(0, d.indexOf(' '))) + d.substring(d.indexOf(' ')));
                     }
@@ -88,6 +94,7 @@ final class BuildCommand implements Callable<Integer> {
                     return Main.OK;
                 }
                 outputs.commit();
+                writing.close();
                 outw.println("odetab: wrote " + outputs.count() + " files for " + work.size() + " table(s) to " + dir);
                 return Main.OK;
             }
@@ -129,12 +136,13 @@ final class BuildCommand implements Callable<Integer> {
      */
     private void evaluate(List<Job> work, int n, PrintWriter err, List<TableResult> results) throws ExprException,
             TableEvaluator.UndecidedException, TableEvaluator.OutOfRangeException {
+        ProgressDisplay progress = ProgressDisplay.forBuild("odetab: evaluating", "rows", quiet);
         ExecutorService pool = Executors.newFixedThreadPool(Math.max(1, Math.min(n, work.size())));
         List<String> lines = new ArrayList<>();
         try {
             List<Future<TableResult>> futures = new ArrayList<>();
             for (Job j : work) {
-                futures.add(pool.submit(() -> TableEvaluator.evaluate(j.table())));
+                futures.add(pool.submit(() -> TableEvaluator.evaluate(j.table(), progress)));
             }
             for (Future<TableResult> f : futures) {
                 TableResult r = get(f);
@@ -144,6 +152,7 @@ final class BuildCommand implements Callable<Integer> {
             }
         } finally {
             pool.shutdownNow();
+            progress.close();
             if (verbose) {
                 lines.forEach(err::println);
             }

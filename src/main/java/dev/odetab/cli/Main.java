@@ -25,9 +25,17 @@ public final class Main implements Runnable {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
+    private static volatile boolean processStreams;
+
     public static void main(String[] args) {
+        processStreams = true;
         System.exit(run(args, new PrintWriter(System.out, true, StandardCharsets.UTF_8),
                 new PrintWriter(System.err, true, StandardCharsets.UTF_8)));
+    }
+
+    /** True when the commands write to the process's own stdout and stderr ({@link #main}), not to a caller's writers. */
+    static boolean processStreams() {
+        return processStreams;
     }
 
     /** Runs one command line; returns the exit code. Used by tests too. */

@@ -6,6 +6,7 @@ import com.univocity.parsers.csv.CsvWriterSettings;
 import dev.odetab.numeric.Entry;
 import dev.odetab.numeric.Format;
 import dev.odetab.tables.Column;
+import dev.odetab.tables.Progress;
 import dev.odetab.tables.TableResult;
 import java.io.IOException;
 import java.io.OutputStream;
@@ -27,8 +28,8 @@ final class CsvOutput {
     private CsvOutput() {
     }
 
-    /** Writes the CSV into {@code out} (UTF-8) row by row, as the rows are read. */
-    static void render(TableResult result, OutputStream out) throws IOException {
+    /** Writes the CSV into {@code out} (UTF-8) row by row, as the rows are read, reporting each row's entries to {@code progress}. */
+    static void render(TableResult result, OutputStream out, Progress progress) throws IOException {
         Format f = result.table().format();
         List<Column> cols = result.table().columns();
         List<String> header = new ArrayList<>();
@@ -43,7 +44,7 @@ final class CsvOutput {
         settings.setQuoteEscapingEnabled(true);
         Writer text = new OutputStreamWriter(out, StandardCharsets.UTF_8);
         try {
-            write(result, header, flags, new CsvWriter(text, settings));
+            write(result, header, flags, new CsvWriter(text, settings), progress);
         } catch (TextWritingException e) {
             // univocity wraps a failure of the writer; a full disk is an I/O problem, not a bug
             for (Throwable c = e.getCause(); c != null; c = c.getCause()) {
@@ -56,7 +57,7 @@ final class CsvOutput {
         text.flush();
     }
 
-    private static void write(TableResult result, List<String> header, boolean flags, CsvWriter w) {
+    private static void write(TableResult result, List<String> header, boolean flags, CsvWriter w, Progress progress) {
         List<Column> cols = result.table().columns();
         w.writeHeaders(header);
         for (TableResult.Row row : result.rows()) {
@@ -72,6 +73,7 @@ final class CsvOutput {
                 cells.addAll(parts);
             }
             w.writeRow(cells.toArray());
+            progress.advance(cols.size());
         }
         w.flush();
     }

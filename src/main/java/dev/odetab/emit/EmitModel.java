@@ -8,6 +8,7 @@ import dev.odetab.numeric.Rounding;
 import dev.odetab.numeric.RoundingMode;
 import dev.odetab.tables.Column;
 import dev.odetab.tables.Grid;
+import dev.odetab.tables.Progress;
 import dev.odetab.tables.TableResult;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -23,7 +24,8 @@ final class EmitModel {
     private EmitModel() {
     }
 
-    static Map<String, Object> of(TableResult result, Provenance provenance, String specTitle) {
+    /** The model of a table; the literals are made as a template reads them, and reported to {@code progress}. */
+    static Map<String, Object> of(TableResult result, Provenance provenance, String specTitle, Progress progress) {
         var t = result.table();
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("tool", Map.of("version", provenance.toolVersion()));
@@ -53,8 +55,8 @@ final class EmitModel {
                 String name = col.name() + part.suffix();
                 int column = c;
                 int index = p;
-                List<String> cLits = new LiteralList(result.rows(), row -> Literals.c(row.entries().get(column), index));
-                List<String> javaLits = new LiteralList(result.rows(), row -> Literals.java(row.entries().get(column), index));
+                List<String> cLits = new LiteralList(result.rows(), row -> Literals.c(row.entries().get(column), index), progress);
+                List<String> javaLits = new LiteralList(result.rows(), row -> Literals.java(row.entries().get(column), index), progress);
                 Map<String, Object> cm = new LinkedHashMap<>();
                 cm.put("name", name);
                 cm.put("macro", name.toUpperCase(Locale.ROOT));

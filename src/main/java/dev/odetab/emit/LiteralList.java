@@ -1,5 +1,6 @@
 package dev.odetab.emit;
 
+import dev.odetab.tables.Progress;
 import dev.odetab.tables.TableResult;
 import java.util.AbstractSequentialList;
 import java.util.Iterator;
@@ -21,10 +22,13 @@ import java.util.function.Function;
 final class LiteralList extends AbstractSequentialList<String> {
     private final List<TableResult.Row> rows;
     private final Function<TableResult.Row, String> literal;
+    private final Progress progress;
 
-    LiteralList(List<TableResult.Row> rows, Function<TableResult.Row, String> literal) {
+    /** The literals {@code literal} makes of the rows; each one a pass of the iterator gives is reported to {@code progress}. */
+    LiteralList(List<TableResult.Row> rows, Function<TableResult.Row, String> literal, Progress progress) {
         this.rows = rows;
         this.literal = literal;
+        this.progress = progress;
     }
 
     @Override
@@ -48,7 +52,9 @@ final class LiteralList extends AbstractSequentialList<String> {
 
             @Override
             public String next() {
-                return literal.apply(it.next());
+                String s = literal.apply(it.next());
+                progress.advance(1);
+                return s;
             }
         };
     }

@@ -1,9 +1,11 @@
 package dev.odetab.emit;
 
+import dev.odetab.tables.Progress;
 import dev.odetab.tables.TableResult;
 import java.io.BufferedOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
+import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -34,29 +36,32 @@ public final class Outputs implements AutoCloseable {
     private final Path staging;
     private final List<Path> created;
     private final String toolVersion;
+    private final Progress progress;
     private final TreeMap<String, Path> files = new TreeMap<>();
     private final List<Map<String, Object>> manifestEntries = new ArrayList<>();
     private boolean manifestStaged;
 
-    private Outputs(Path dir, Path staging, List<Path> created, String toolVersion) {
+    private Outputs(Path dir, Path staging, List<Path> created, String toolVersion, Progress progress) {
         this.dir = dir;
         this.staging = staging;
         this.created = created;
         this.toolVersion = toolVersion;
+        this.progress = progress;
     }
 
     /**
      * Outputs to be written into {@code dir}: temporary files go there (so that the final
      * renames stay on one file system); the folder is created when missing, and removed again
-     * by {@link #close} unless the outputs were committed.
+     * by {@link #close} unless the outputs were committed. The entries written are reported to
+     * {@code progress}.
      */
-    public static Outputs forWriting(Path dir, String toolVersion) throws IOException {
+    public static Outputs forWriting(Path dir, String toolVersion, Progress progress) throws IOException {
         List<Path> created = new ArrayList<>();
         for (Path p = dir.toAbsolutePath().normalize(); p != null && !Files.exists(p); p = p.getParent()) {
             created.add(p);
         }
         Files.createDirectories(dir);
-        return new Outputs(dir, dir, created, toolVersion);
+        return new Outputs(dir, dir, created, toolVersion, progress);
     }
 
     /**
@@ -64,9 +69,9 @@ public final class Outputs implements AutoCloseable {
      * folder in {@code java.io.tmpdir}, so that checking needs no write access to {@code dir}
      * and never touches it.
      */
-    public static Outputs forChecking(Path dir, String toolVersion) throws IOException {
+    public static Outputs forChecking(Path dir, String toolVersion, Progress progress) throws IOException {
         Path staging = Files.createTempDirectory("odetab-check-");
-        return new Outputs(dir, staging, List.of(staging), toolVersion);
+        return new Outputs(dir, staging, new ArrayList<>(List.of(staging)), toolVersion, progress);
     }
 
     /** A template problem (exit 2), located in the template. */
@@ -100,12 +105,13 @@ public final class Outputs implements AutoCloseable {
 
     /** Renders the outputs the table asks for. */
     public void add(TableResult result, Provenance provenance, String specTitle) throws TemplateError, ClashError, IOException {
-        Map<String, Object> model = EmitModel.of(result, provenance, specTitle);
+        Map<String, Object> model = EmitModel.of(result, provenance, specTitle, progress);
         String name = result.table().name();
+        progress.start(name, entriesWritten(result));
         for (String output : result.table().outputs()) {
             try {
                 switch (output) {
-                    case "csv" -> stage(name + ".csv", provenance, out -> CsvOutput.render(result, out));
+                    case "csv" -> stage(name + ".csv", provenance, out -> CsvOutput.render(result, out, progress));
                     case "c" -> {
                         String base = name.toLowerCase(Locale.ROOT);
                         stage(base + ".h", provenance, out -> TemplateEngine.renderBuiltIn("c_header.ftl", model, out));
@@ -122,6 +128,22 @@ public final class Outputs implements AutoCloseable {
                 throw new TemplateError(e.where(), e.getMessage());
             }
         }
+    }
+
+    /**
+     * The entries the table's outputs write, as the progress counts them: each CSV row one per
+     * column, each template one per element of every array (an estimate for a user template,
+     * which may list an array any number of times, or none).
+     */
+    private static long entriesWritten(TableResult result) {
+        long rows = result.rows().size();
+        int columns = result.table().columns().size();
+        int arrays = columns * Literals.parts(result.table().format()).size();
+        long entries = 0;
+        for (String output : result.table().outputs()) {
+            entries += rows * (output.equals("csv") ? columns : arrays);
+        }
+        return entries;
     }
 
     /**
@@ -160,8 +182,11 @@ public final class Outputs implements AutoCloseable {
 
     /** Renders into a new temporary file registered under {@code file}; returns the SHA-256 of what was written. */
     private String stageBytes(String file, Renderer renderer) throws IOException, TemplateEngine.TemplateProblem {
-        Path tmp = OutputWriter.createTemporary(staging);
-        files.put(file, tmp);
+        Path tmp;
+        synchronized (this) {
+            tmp = OutputWriter.createTemporary(staging);
+            files.put(file, tmp);
+        }
         MessageDigest md = sha256();
         try (OutputStream out = new BufferedOutputStream(new DigestOutputStream(Files.newOutputStream(tmp), md), 1 << 16)) {
             renderer.render(out);
@@ -199,7 +224,7 @@ public final class Outputs implements AutoCloseable {
     }
 
     /** Renames every file, the manifest included, over its target in the output folder. */
-    public void commit() throws IOException {
+    public synchronized void commit() throws IOException {
         stageManifest();
         OutputWriter.commit(dir, files);
         files.clear();
@@ -209,12 +234,15 @@ public final class Outputs implements AutoCloseable {
     /** Deletes every temporary file left, and the folders this build created unless it committed. */
     @Override
     public void close() throws IOException {
-        for (Path tmp : files.values()) {
-            Files.deleteIfExists(tmp);
-        }
-        files.clear();
-        for (Path p : created) {
-            if (Files.isDirectory(p)) {
+        try {
+            for (Path tmp : files.values()) {
+                Files.deleteIfExists(tmp);
+            }
+            files.clear();
+            for (Path p : created) {
+                if (!Files.isDirectory(p)) {
+                    continue;
+                }
                 try (Stream<Path> s = Files.list(p)) {
                     if (s.findAny().isPresent()) {
                         break;
@@ -222,6 +250,9 @@ public final class Outputs implements AutoCloseable {
                 }
                 Files.delete(p);
             }
+            created.clear();
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot delete the temporary outputs: " + e.getMessage(), e);
         }
     }
 

@@ -2,8 +2,9 @@ package dev.odetab.tables;
 
 /**
  * Receives the progress of table evaluations: how many rows each table has and how many are
- * decided. Calls may come from several threads at once; implementations must be thread-safe.
- * Progress never influences what is computed.
+ * decided (the writing of outputs reports entries written the same way). Calls may come from
+ * several threads at once; implementations must be thread-safe. Progress never influences
+ * what is computed.
  */
 public interface Progress {
     /** Reports nothing. */

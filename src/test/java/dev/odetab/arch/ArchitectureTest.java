@@ -21,8 +21,8 @@ import org.junit.jupiter.api.Test;
 /**
  * The dependency rule of STYLE.md, read from the import statements of the main sources:
  * {@code cli → spec, tables, emit, audit → series → ode → expr → numeric}; no package
- * imports one of a higher layer, packages of one layer form no cycle, and big-math is
- * imported only inside {@code numeric}.
+ * imports one of a higher layer, packages of one layer form no cycle, big-math is imported
+ * only inside {@code numeric} and the progress bar library only inside {@code cli}.
  */
 class ArchitectureTest {
     private static final Path ROOT = Path.of("src/main/java/dev/odetab");
@@ -79,14 +79,23 @@ class ArchitectureTest {
         }
     }
 
-    @Test
-    void bigMathOnlyInsideNumeric() throws IOException {
+    private static void onlyInside(String library, String pkg) throws IOException {
         try (Stream<Path> files = Files.walk(ROOT)) {
             for (Path p : files.filter(f -> f.toString().endsWith(".java")).toList()) {
-                if (Files.readString(p).contains("ch.obermuhlner")) {
-                    assertEquals("numeric", ROOT.relativize(p).getName(0).toString(), p + " imports big-math");
+                if (Files.readString(p).contains(library)) {
+                    assertEquals(pkg, ROOT.relativize(p).getName(0).toString(), p + " uses " + library);
                 }
             }
         }
+    }
+
+    @Test
+    void bigMathOnlyInsideNumeric() throws IOException {
+        onlyInside("ch.obermuhlner", "numeric");
+    }
+
+    @Test
+    void progressBarsOnlyInsideCli() throws IOException {
+        onlyInside("me.tongfei", "cli");
     }
 }

@@ -18,8 +18,9 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * DESIGN.md "Outputs" and "Command line": the same spec gives the same bytes (manifest.json
- * included, whatever --jobs); {@code --check} writes nothing and exits 1 naming a changed file;
- * outputs are written atomically, so a build that fails leaves every file as it was.
+ * included, whatever --jobs, with or without --quiet); {@code --check} writes nothing and exits
+ * 1 naming a changed file; outputs are written atomically, so a build that fails leaves every
+ * file as it was.
  */
 class BuildDeterminismTest {
     private static final String DIR = "src/test/resources/build/";
@@ -46,13 +47,17 @@ class BuildDeterminismTest {
     }
 
     @Test
-    void buildingTwiceGivesTheSameBytes(@TempDir Path tmp) throws IOException {
+    void buildingTwiceGivesTheSameBytesWhateverTheJobs(@TempDir Path tmp) throws IOException {
         Map<String, byte[]> first = snapshot(EveryFormatBuild.dir());
         assertTrue(first.containsKey("manifest.json") && first.size() > 20, "files of the first build: " + first.keySet());
-        Path again = tmp.resolve("again");
-        CliRunner.Result r = CliRunner.run("build", EveryFormatBuild.SPEC.toString(), "--out", again.toString(), "--jobs", "1");
-        assertEquals(0, r.code(), r.err());
-        assertSameFiles(first, snapshot(again), "a second build with --jobs 1");
+        for (String jobs : new String[] {"1", "2"}) {
+            Path again = tmp.resolve("jobs" + jobs);
+            CliRunner.Result r = CliRunner.run("build", EveryFormatBuild.SPEC.toString(), "--out", again.toString(), "--jobs", jobs,
+                    "--quiet");
+            assertEquals(0, r.code(), r.err());
+            assertEquals("", r.err(), "--quiet: nothing on stderr");
+            assertSameFiles(first, snapshot(again), "a second build with --jobs " + jobs);
+        }
     }
 
     @Test
@@ -97,9 +102,11 @@ class BuildDeterminismTest {
                 + "(raise precision_cap_bits, or the value may be an exact rounding boundary)\n", undecided.err());
         assertSameFiles(before, snapshot(out), "after a build failing at the precision cap");
 
-        Path fresh = tmp.resolve("fresh");
-        assertEquals(2, CliRunner.run("build", DIR + "atomic-out-of-range.toml", "--out", fresh.toString()).code());
-        assertFalse(Files.exists(fresh), "a failed build creates no output folder");
+        for (String spec : new String[] {"atomic-out-of-range.toml"}) {
+            Path fresh = tmp.resolve("fresh/deeper");
+            assertEquals(2, CliRunner.run("build", DIR + spec, "--out", fresh.toString()).code());
+            assertFalse(Files.exists(fresh.getParent()), "a failed build creates no output folder: " + spec);
+        }
     }
 
     @Test
