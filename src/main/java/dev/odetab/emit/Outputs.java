@@ -27,7 +27,8 @@ import java.util.stream.Stream;
  * with the length of a table. {@link #commit} renames them all over their targets
  * ({@link OutputWriter}); {@link #differences} compares them with the files on disk for
  * {@code --check}; {@link #close} deletes whatever was not committed, so a build that fails
- * at any point leaves every existing file as it was, and creates no output folder.
+ * at any point leaves every existing file as it was, and creates no output folder. A shutdown
+ * hook does the same when the process is stopped (Ctrl-C, SIGTERM) while outputs are written.
  */
 public final class Outputs implements AutoCloseable {
     public static final String MANIFEST = "manifest.json";
@@ -37,6 +38,7 @@ public final class Outputs implements AutoCloseable {
     private final List<Path> created;
     private final String toolVersion;
     private final Progress progress;
+    private final Thread cleanup = new Thread(this::deleteUncommitted, "odetab: delete temporary outputs");
     private final TreeMap<String, Path> files = new TreeMap<>();
     private final List<Map<String, Object>> manifestEntries = new ArrayList<>();
     private boolean manifestStaged;
@@ -47,6 +49,7 @@ public final class Outputs implements AutoCloseable {
         this.created = created;
         this.toolVersion = toolVersion;
         this.progress = progress;
+        Runtime.getRuntime().addShutdownHook(cleanup);
     }
 
     /**
@@ -234,6 +237,16 @@ public final class Outputs implements AutoCloseable {
     /** Deletes every temporary file left, and the folders this build created unless it committed. */
     @Override
     public void close() throws IOException {
+        try {
+            Runtime.getRuntime().removeShutdownHook(cleanup);
+        } catch (IllegalStateException e) {
+            // the JVM is shutting down: the hook deletes them
+            return;
+        }
+        deleteUncommitted();
+    }
+
+    private synchronized void deleteUncommitted() {
         try {
             for (Path tmp : files.values()) {
                 Files.deleteIfExists(tmp);
