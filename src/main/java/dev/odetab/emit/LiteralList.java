@@ -2,6 +2,7 @@ package dev.odetab.emit;
 
 import dev.odetab.tables.Progress;
 import dev.odetab.tables.TableResult;
+import java.util.AbstractList;
 import java.util.AbstractSequentialList;
 import java.util.Iterator;
 import java.util.List;
@@ -59,54 +60,19 @@ final class LiteralList extends AbstractSequentialList<String> {
         };
     }
 
+    /** Reads through {@link #get} (so backwards too); the streaming pass is {@link #iterator()}. */
     @Override
     public ListIterator<String> listIterator(int start) {
-        ListIterator<TableResult.Row> it = rows.listIterator(start);
-        return new ListIterator<>() {
+        return new AbstractList<String>() {
             @Override
-            public boolean hasNext() {
-                return it.hasNext();
+            public String get(int i) {
+                return LiteralList.this.get(i);
             }
 
             @Override
-            public String next() {
-                return literal.apply(it.next());
+            public int size() {
+                return rows.size();
             }
-
-            @Override
-            public boolean hasPrevious() {
-                return it.hasPrevious();
-            }
-
-            @Override
-            public String previous() {
-                return literal.apply(it.previous());
-            }
-
-            @Override
-            public int nextIndex() {
-                return it.nextIndex();
-            }
-
-            @Override
-            public int previousIndex() {
-                return it.previousIndex();
-            }
-
-            @Override
-            public void remove() {
-                throw new UnsupportedOperationException();
-            }
-
-            @Override
-            public void set(String s) {
-                throw new UnsupportedOperationException();
-            }
-
-            @Override
-            public void add(String s) {
-                throw new UnsupportedOperationException();
-            }
-        };
+        }.listIterator(start);
     }
 }
