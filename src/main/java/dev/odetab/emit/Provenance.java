@@ -21,11 +21,13 @@ public record Provenance(String specPath, String specSha256, String table, Strin
                 ? "none: every entry was computed exactly before rounding"
                 : "largest proven relative error before rounding " + r.maxRelativeRadius().toString().replace("E", "e")
                         + " (enclosure radius / |value|), working precision up to " + r.maxPrecBits() + " bits";
-        long saturated = r.rows().stream().flatMap(row -> row.entries().stream())
-                .filter(e -> e.kind() == dev.odetab.numeric.Entry.Kind.SATURATED).count();
-        String format = t.format().name() + (t.outOfRange() == dev.odetab.numeric.OutOfRange.SATURATE
-                ? " (out of range: saturate; " + saturated + " entr" + (saturated == 1 ? "y" : "ies") + " saturated, flagged in the CSV)"
-                : "");
+        String format = t.format().name();
+        if (t.outOfRange() == dev.odetab.numeric.OutOfRange.SATURATE) {
+            // one pass over the rows, only for the tables that can have saturated entries
+            long saturated = r.rows().stream().flatMap(row -> row.entries().stream())
+                    .filter(e -> e.kind() == dev.odetab.numeric.Entry.Kind.SATURATED).count();
+            format += " (out of range: saturate; " + saturated + " entr" + (saturated == 1 ? "y" : "ies") + " saturated, flagged in the CSV)";
+        }
         return new Provenance(specPath.replace('\\', '/'), Outputs.sha256(specBytes), t.name(), t.functionName() + " (" + f.name() + ")",
                 f.equation().toString(), normalization, t.grid().describe(), format, t.rounding().spelling(),
                 maxError, toolVersion);
