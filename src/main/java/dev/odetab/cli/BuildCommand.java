@@ -122,11 +122,14 @@ final class BuildCommand implements Callable<Integer> {
     private List<TableResult> evaluate(List<Job> work, int n, PrintWriter err) throws ExprException,
             TableEvaluator.UndecidedException, TableEvaluator.OutOfRangeException {
         List<TableResult> results = new ArrayList<>();
+        // Tables run on one pool and the chunks of large grids on another, so that a table
+        // waiting for its chunks never holds a thread that a chunk needs.
         ExecutorService pool = Executors.newFixedThreadPool(Math.max(1, Math.min(n, work.size())));
+        ExecutorService chunkPool = n == 1 ? null : Executors.newFixedThreadPool(n);
         try {
             List<Future<TableResult>> futures = new ArrayList<>();
             for (Job j : work) {
-                futures.add(pool.submit(() -> TableEvaluator.evaluate(j.table())));
+                futures.add(pool.submit(() -> TableEvaluator.evaluate(j.table(), dev.odetab.tables.Progress.NONE, chunkPool)));
             }
             for (int i = 0; i < futures.size(); i++) {
                 TableResult r = get(futures.get(i));
@@ -138,6 +141,9 @@ final class BuildCommand implements Callable<Integer> {
             }
         } finally {
             pool.shutdownNow();
+            if (chunkPool != null) {
+                chunkPool.shutdownNow();
+            }
         }
         return results;
     }

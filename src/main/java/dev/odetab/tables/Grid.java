@@ -26,6 +26,15 @@ public sealed interface Grid {
         return points().get(i);
     }
 
+    /**
+     * The rational used for point i: the point itself when it is exact, otherwise a rational near
+     * the irrational node (the center of the last series step); the i-th element of {@link #points()}.
+     */
+    default Rational center(int i) {
+        Rational exact = exactPoint(i);
+        return exact != null ? exact : points().get(i);
+    }
+
     /** A ball containing point i (exact points give exact balls). */
     default Ball node(int i, int precBits) {
         return Ball.of(exactPoint(i), precBits);
@@ -143,15 +152,15 @@ public sealed interface Grid {
         public List<Rational> points() {
             List<Rational> r = new ArrayList<>(n);
             for (int i = 0; i < n; i++) {
-                Rational exact = exactPoint(i);
-                if (exact != null) {
-                    r.add(exact);
-                } else {
-                    BigDecimal m = node(i, 128).mid().round(new MathContext(30));
-                    r.add(Rational.of(m));
-                }
+                r.add(center(i));
             }
             return r;
+        }
+
+        @Override
+        public Rational center(int i) {
+            Rational exact = exactPoint(i);
+            return exact != null ? exact : Rational.of(node(i, 128).mid().round(new MathContext(30)));
         }
 
         @Override
