@@ -114,27 +114,58 @@ final class FastTier {
                 undecided.add(i);
             }
         }
-        if (System.getenv("ODETAB_FASTSTAT") != null) { System.err.println("fast chunk " + s + ".." + e + " undecided " + undecided.size()); }
         BigDecimal rel = maxRel == 0 ? BigDecimal.ZERO : new BigDecimal(maxRel).round(REL);
         return new Outcome(undecided, rel, undecided.size() == e - s ? 0 : PRECISION_BITS);
     }
 
     /**
-     * Balls containing y and y' at the first point of every chunk, by one walk from the
-     * normalization point at {@link FastWalk#START_BITS} bits ({@link GridWalk}; sequential and
-     * deterministic); null when that walk would cross a singular point (the BigDecimal tier then
-     * reports it with the table's own points).
+     * Balls containing y and y' at the first point of every chunk, by walks from the
+     * normalization point ({@link GridWalk}; sequential and deterministic), at
+     * {@link FastWalk#START_BITS} bits and again at doubled precision for the starts whose balls
+     * are wider than 2^−115 of the jet's size (long walks on oscillating solutions lose bits to
+     * the wrapping effect, METHODS §4), up to the table's cap; null when a walk would cross a
+     * singular point (the BigDecimal tier then reports it with the table's own points).
      */
     static List<Jet> chunkStarts(TableDef t, int size, int chunks) throws ExprException {
         List<Rational> xs = new ArrayList<>(chunks);
         for (int c = 0; c < chunks; c++) {
             xs.add(t.grid().exactPoint(c * size));
         }
+        Jet[] starts = new Jet[chunks];
+        List<Integer> wanted = new ArrayList<>();
+        for (int c = 0; c < chunks; c++) {
+            wanted.add(c);
+        }
+        int prec = FastWalk.START_BITS;
         try {
-            return GridWalk.enclose(t.function(), xs, FastWalk.START_BITS);
+            while (!wanted.isEmpty()) {
+                List<Rational> pts = new ArrayList<>();
+                for (int c : wanted) {
+                    pts.add(xs.get(c));
+                }
+                List<Jet> jets = GridWalk.enclose(t.function(), pts, prec);
+                List<Integer> wider = new ArrayList<>();
+                for (int k = 0; k < wanted.size(); k++) {
+                    int c = wanted.get(k);
+                    starts[c] = jets.get(k);
+                    if (!narrow(jets.get(k)) && 2 * prec <= t.capBits()) {
+                        wider.add(c);
+                    }
+                }
+                wanted = wider;
+                prec *= 2;
+            }
         } catch (SingularCrossingException ex) {
             return null;
         }
+        return List.of(starts);
+    }
+
+    /** Heuristic: both radii below 2^−115 of max(|y|, |y'|). */
+    private static boolean narrow(Jet j) {
+        BigDecimal size = j.value().mid().abs().max(j.derivative().mid().abs());
+        BigDecimal limit = size.multiply(new BigDecimal(0x1p-115));
+        return j.value().rad().compareTo(limit) <= 0 && j.derivative().rad().compareTo(limit) <= 0;
     }
 
     /** The entry every point of b rounds to, or null. */
