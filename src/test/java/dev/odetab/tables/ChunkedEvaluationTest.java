@@ -24,7 +24,7 @@ import org.junit.jupiter.api.Test;
  * AiryRoundingTest) at sampled points, in every format the fast tier serves.
  */
 class ChunkedEvaluationTest {
-    private static TableDef airy(Format format, RoundingMode mode, String from, String to, String step) {
+    private static TableDef airy(Format format, RoundingMode mode, String from, String to, String step) throws Exception {
         FunctionDef f = Catalog.lookup("airy-ai").orElseThrow().define(Map.of());
         Grid grid = new Grid.Uniform(Rational.parse(from), Rational.parse(to), Rational.parse(step));
         return new TableDef("ai", "ai", f, grid, List.of(Column.parse("x"), Column.parse("value"), Column.parse("derivative")),
@@ -56,7 +56,7 @@ class ChunkedEvaluationTest {
             for (RoundingMode mode : RoundingMode.values()) {
                 TableDef t = airy(format, mode, "-3", "1", "1/250");
                 TableResult r = TableEvaluator.evaluate(t);
-                for (int i = 0; i < r.rows().size(); i += 37) {
+                for (int i = 0; i < r.rows().size(); i += 101) {
                     Rational x = t.grid().exactPoint(i);
                     for (int c = 1; c <= 2; c++) {
                         Entry expected = FunctionEvaluator.entry(t.function(), x, c == 2, format, mode, OutOfRange.SATURATE, 4096).entry();
