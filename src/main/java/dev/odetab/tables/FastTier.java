@@ -191,7 +191,7 @@ final class FastTier {
      * what {@link Rounding#round} gives for it.
      */
     static Entry binaryEntry(Format f, double d) {
-        return new Entry(f, Entry.Kind.FINITE, d < 0, Rational.of(new BigDecimal(d)), null, null);
+        return new Entry(f, Entry.Kind.FINITE, d < 0, Rational.ofDouble(d), null, null);
     }
 
     /** An upper bound of rad/|value| (the same quantity as TableEvaluator's), in doubles; 1 when the ball nears 0. */

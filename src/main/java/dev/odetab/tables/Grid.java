@@ -4,6 +4,7 @@ import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.BallFunctions;
 import dev.odetab.numeric.Rational;
 import java.math.BigDecimal;
+import java.math.BigInteger;
 import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
@@ -62,6 +63,21 @@ public sealed interface Grid {
 
         @Override
         public Rational exactPoint(int i) {
+            // from = a/b, step = c/d: x_i = (a d + i c b) / (b d), in longs when nothing can overflow.
+            BigInteger a = from.numerator();
+            BigInteger b = from.denominator();
+            BigInteger c = step.numerator();
+            BigInteger d = step.denominator();
+            if (a.bitLength() < 63 && b.bitLength() < 63 && c.bitLength() < 63 && d.bitLength() < 63) {
+                try {
+                    long bd = Math.multiplyExact(b.longValue(), d.longValue());
+                    long num = Math.addExact(Math.multiplyExact(a.longValue(), d.longValue()),
+                            Math.multiplyExact(Math.multiplyExact((long) i, c.longValue()), b.longValue()));
+                    return Rational.of(num, bd);
+                } catch (ArithmeticException overflow) {
+                    // exact BigInteger arithmetic below
+                }
+            }
             return from.add(step.multiply(Rational.of(i)));
         }
 
