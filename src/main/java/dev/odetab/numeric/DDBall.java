@@ -110,7 +110,7 @@ public final class DDBall {
 
     /** An upper bound of |x| over the ball. */
     public double absUpper() {
-        return (Math.abs(hi) + Math.abs(lo) + rad) * UP + TINY;
+        return absUpper(hi, lo, rad);
     }
 
     /** A lower bound of |x| over the ball (0 when the ball contains 0). */
@@ -133,16 +133,26 @@ public final class DDBall {
      * most u|t1| and u|t2|; the final renormalization is exact (TwoSum).
      */
     public DDBall add(DDBall y) {
-        double s = hi + y.hi;
-        double bb = s - hi;
-        double e = (hi - (s - bb)) + (y.hi - bb);
-        double t1 = lo + y.lo;
+        double[] o = new double[3];
+        add(hi, lo, rad, y.hi, y.lo, y.rad, o);
+        return new DDBall(o[0], o[1], o[2]);
+    }
+
+    /**
+     * The sum of the balls (ah + al ± ar) and (bh + bl ± br) into {@code out} = {hi, lo, rad}:
+     * {@link #add(DDBall)} without objects, for inner loops.
+     */
+    public static void add(double ah, double al, double ar, double bh, double bl, double br, double[] out) {
+        double s = ah + bh;
+        double bb = s - ah;
+        double e = (ah - (s - bb)) + (bh - bb);
+        double t1 = al + bl;
         double t2 = t1 + e;
         double h = s + t2;
         double b2 = h - s;
-        double l = (s - (h - b2)) + (t2 - b2);
-        double r = (rad + y.rad + U * (Math.abs(t1) + Math.abs(t2))) * UP + TINY;
-        return new DDBall(h, l, r);
+        out[0] = h;
+        out[1] = (s - (h - b2)) + (t2 - b2);
+        out[2] = (ar + br + U * (Math.abs(t1) + Math.abs(t2))) * UP + TINY;
     }
 
     public DDBall subtract(DDBall y) {
@@ -155,34 +165,57 @@ public final class DDBall {
      * whole. For the radii, |x·y − mx·my| &lt;= |mx| ry + |my| rx + rx ry.
      */
     public DDBall multiply(DDBall y) {
-        double p = hi * y.hi;
-        double e = Math.fma(hi, y.hi, -p);
-        double t1 = hi * y.lo;
-        double t2 = lo * y.hi;
+        double[] o = new double[3];
+        multiply(hi, lo, rad, y.hi, y.lo, y.rad, o);
+        return new DDBall(o[0], o[1], o[2]);
+    }
+
+    /** The product of two balls into {@code out}: {@link #multiply(DDBall)} without objects. */
+    public static void multiply(double xh, double xl, double xr, double yh, double yl, double yr, double[] out) {
+        double p = xh * yh;
+        double e = Math.fma(xh, yh, -p);
+        double t1 = xh * yl;
+        double t2 = xl * yh;
         double t3 = t1 + t2;
         double t4 = t3 + e;
         double h = p + t4;
         double b2 = h - p;
-        double l = (p - (h - b2)) + (t4 - b2);
-        double ax = Math.abs(hi) + Math.abs(lo);
-        double ay = Math.abs(y.hi) + Math.abs(y.lo);
-        double err = U * (Math.abs(t1) + Math.abs(t2) + Math.abs(t3) + Math.abs(t4)) + Math.abs(lo * y.lo);
-        double r = (ax * y.rad + ay * rad + rad * y.rad + err) * UP + TINY;
-        return new DDBall(h, l, r);
+        double ax = Math.abs(xh) + Math.abs(xl);
+        double ay = Math.abs(yh) + Math.abs(yl);
+        double err = U * (Math.abs(t1) + Math.abs(t2) + Math.abs(t3) + Math.abs(t4)) + Math.abs(xl * yl);
+        out[0] = h;
+        out[1] = (p - (h - b2)) + (t4 - b2);
+        out[2] = (ax * yr + ay * xr + xr * yr + err) * UP + TINY;
     }
 
     /** x · k for an exact double k (the product {@link #multiply} with an exact ball). */
     public DDBall multiply(double k) {
-        double p = hi * k;
-        double e = Math.fma(hi, k, -p);
-        double t2 = lo * k;
+        double[] o = new double[3];
+        multiply(hi, lo, rad, k, o);
+        return new DDBall(o[0], o[1], o[2]);
+    }
+
+    /** The ball times an exact double k into {@code out}: {@link #multiply(double)} without objects. */
+    public static void multiply(double xh, double xl, double xr, double k, double[] out) {
+        double p = xh * k;
+        double e = Math.fma(xh, k, -p);
+        double t2 = xl * k;
         double t4 = t2 + e;
         double h = p + t4;
         double b2 = h - p;
-        double l = (p - (h - b2)) + (t4 - b2);
-        double err = U * (Math.abs(t2) + Math.abs(t4));
-        double r = (Math.abs(k) * rad + err) * UP + TINY;
-        return new DDBall(h, l, r);
+        out[0] = h;
+        out[1] = (p - (h - b2)) + (t4 - b2);
+        out[2] = (Math.abs(k) * xr + U * (Math.abs(t2) + Math.abs(t4))) * UP + TINY;
+    }
+
+    /** An upper bound of |x| over the ball (ah + al ± ar): {@link #absUpper()} without objects. */
+    public static double absUpper(double h, double l, double r) {
+        return (Math.abs(h) + Math.abs(l) + r) * UP + TINY;
+    }
+
+    /** The ball from its three parts (hi + lo ± rad); rad must be a non-negative upper bound. */
+    public static DDBall of(double hi, double lo, double rad) {
+        return new DDBall(hi, lo, rad);
     }
 
     /**

@@ -44,7 +44,14 @@ public final class FastStepper {
     private final double[] absA;
     private final double[] absB;
     private final double[] absD;
-    private final DDBall[] u = new DDBall[MAX_TERMS + 1];
+    private final double[] uh = new double[MAX_TERMS + 1];
+    private final double[] ul = new double[MAX_TERMS + 1];
+    private final double[] ur = new double[MAX_TERMS + 1];
+    private final double[] scratch = new double[3];
+    private final boolean[][] present;
+    private final double[][] ch;
+    private final double[][] cl;
+    private final double[][] cr;
     private final double[] termBound = new double[MAX_TERMS + 1];
 
     /** The stepper for this equation (its reduced form is used). */
@@ -61,6 +68,10 @@ public final class FastStepper {
         absA = new double[order + 1];
         absB = new double[order + 1];
         absD = new double[order + 1];
+        present = new boolean[3][order + 1];
+        ch = new double[3][order + 1];
+        cl = new double[3][order + 1];
+        cr = new double[3][order + 1];
     }
 
     private static DDBall[] balls(Poly p) {
@@ -146,54 +157,128 @@ public final class FastStepper {
             return null;
         }
         DDBall u1 = dy.multiply(powers[1]);
-        u[0] = y;
-        u[1] = u1;
+        // The inner loop works on (hi, lo, rad) triples with the allocation-free DDBall operations.
+        for (int jj = 1; jj <= order; jj++) {
+            load(bigA[jj], jj, 0);
+            load(bigB[jj], jj, 1);
+            load(bigD[jj], jj, 2);
+        }
+        uh[0] = y.hi();
+        ul[0] = y.lo();
+        ur[0] = y.rad();
+        uh[1] = u1.hi();
+        ul[1] = u1.lo();
+        ur[1] = u1.rad();
         termBound[0] = y.absUpper();
         termBound[1] = u1.absUpper();
-        DDBall sum = y.add(u1);
-        DDBall dsum = u1; // Σ m u_m; y'(c + t) = dsum / t
+        double[] o = scratch;
+        DDBall.add(uh[0], ul[0], ur[0], uh[1], ul[1], ur[1], o);
+        double sh = o[0];
+        double sl = o[1];
+        double sr = o[2];
+        double dh = uh[1]; // Σ m u_m; y'(c + t) = (Σ m u_m) / t
+        double dl = ul[1];
+        double dr = ur[1];
         for (int m = 2; m < MAX_TERMS; m++) {
-            DDBall acc = null;
+            boolean any = false;
+            double ah = 0;
+            double al = 0;
+            double ar = 0;
             for (int j = 1; j <= order && j <= m; j++) {
-                DDBall k = null;
-                if (bigA[j] != null) {
-                    k = bigA[j].multiply((double) (m - j) * (m - j - 1));
+                boolean has = false;
+                double kh = 0;
+                double kl = 0;
+                double kr = 0;
+                if (present[0][j]) {
+                    DDBall.multiply(ch[0][j], cl[0][j], cr[0][j], (double) (m - j) * (m - j - 1), o);
+                    kh = o[0];
+                    kl = o[1];
+                    kr = o[2];
+                    has = true;
                 }
-                if (bigB[j] != null) {
-                    DDBall kb = bigB[j].multiply(m - j);
-                    k = k == null ? kb : k.add(kb);
+                if (present[1][j]) {
+                    DDBall.multiply(ch[1][j], cl[1][j], cr[1][j], m - j, o);
+                    if (has) {
+                        DDBall.add(kh, kl, kr, o[0], o[1], o[2], o);
+                    }
+                    kh = o[0];
+                    kl = o[1];
+                    kr = o[2];
+                    has = true;
                 }
-                if (bigD[j] != null) {
-                    k = k == null ? bigD[j] : k.add(bigD[j]);
+                if (present[2][j]) {
+                    if (has) {
+                        DDBall.add(kh, kl, kr, ch[2][j], cl[2][j], cr[2][j], o);
+                        kh = o[0];
+                        kl = o[1];
+                        kr = o[2];
+                    } else {
+                        kh = ch[2][j];
+                        kl = cl[2][j];
+                        kr = cr[2][j];
+                    }
+                    has = true;
                 }
-                if (k == null) {
+                if (!has) {
                     continue;
                 }
-                DDBall term = k.multiply(u[m - j]);
-                acc = acc == null ? term : acc.add(term);
+                DDBall.multiply(kh, kl, kr, uh[m - j], ul[m - j], ur[m - j], o);
+                if (any) {
+                    DDBall.add(ah, al, ar, o[0], o[1], o[2], o);
+                }
+                ah = o[0];
+                al = o[1];
+                ar = o[2];
+                any = true;
             }
-            DDBall um = acc == null ? DDBall.ZERO : acc.multiply(RECIPROCAL_PAIRS[m]).negate();
-            u[m] = um;
-            sum = sum.add(um);
-            dsum = dsum.add(um.multiply(m));
-            termBound[m] = um.absUpper();
+            DDBall rm = RECIPROCAL_PAIRS[m];
+            if (any) {
+                DDBall.multiply(ah, al, ar, rm.hi(), rm.lo(), rm.rad(), o);
+                uh[m] = -o[0];
+                ul[m] = -o[1];
+                ur[m] = o[2];
+            } else {
+                uh[m] = 0;
+                ul[m] = 0;
+                ur[m] = 0;
+            }
+            DDBall.add(sh, sl, sr, uh[m], ul[m], ur[m], o);
+            sh = o[0];
+            sl = o[1];
+            sr = o[2];
+            DDBall.multiply(uh[m], ul[m], ur[m], m, o);
+            DDBall.add(dh, dl, dr, o[0], o[1], o[2], o);
+            dh = o[0];
+            dl = o[1];
+            dr = o[2];
+            termBound[m] = DDBall.absUpper(uh[m], ul[m], ur[m]);
             int bigN = m + 1;
-            if (bigN > order + 1 && lastTermsSmall(termBound, m, STOP * Math.min(Math.abs(sum.hi()), Math.abs(dsum.hi())))) {
+            if (bigN > order + 1 && lastTermsSmall(termBound, m, STOP * Math.min(Math.abs(sh), Math.abs(dh)))) {
                 double[] tail = tail(bigN, bigT, termBound, absA, absB, absD);
                 if (tail != null) {
-                    DDBall value = sum.addError(tail[0]);
-                    DDBall derivative = dsum.multiply(inverse).addError(tail[1]);
+                    DDBall value = DDBall.of(sh, sl, sr).addError(tail[0]);
+                    DDBall derivative = DDBall.of(dh, dl, dr).multiply(inverse).addError(tail[1]);
                     if (!value.isFinite() || !derivative.isFinite()) {
                         return null;
                     }
                     return new DDBall[] {value, derivative};
                 }
             }
-            if (!sum.isFinite()) {
+            if (!Double.isFinite(sh) || !Double.isFinite(sr)) {
                 return null;
             }
         }
         return null;
+    }
+
+    /** Copies a normalized coefficient ball into the triple arrays (absent when null). */
+    private void load(DDBall b, int j, int which) {
+        present[which][j] = b != null;
+        if (b != null) {
+            ch[which][j] = b.hi();
+            cl[which][j] = b.lo();
+            cr[which][j] = b.rad();
+        }
     }
 
     /** x · inv · tj, or null for an exact zero x; inv null means 1. */

@@ -104,9 +104,10 @@ final class FastTier {
                 }
             }
             if (decided) {
-                Rational x = grid.exactPoint(i);
                 for (int c = 0; c < cols.size(); c++) {
-                    row[c] = TableEvaluator.checked(t, x, cols.get(c), row[c]);
+                    if (row[c].kind() == Entry.Kind.OUT_OF_RANGE) {
+                        TableEvaluator.checked(t, grid.exactPoint(i), cols.get(c), row[c]);
+                    }
                 }
                 entries[i - s] = row;
                 maxRel = Math.max(maxRel, rowRel);

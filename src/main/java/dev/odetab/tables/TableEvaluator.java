@@ -191,8 +191,8 @@ public final class TableEvaluator {
         Grid grid = t.grid();
         List<Integer> pending = new ArrayList<>();
         for (int i = s; i < e; i++) {
-            Rational x = grid.exactPoint(i);
-            if (poly.isPresent() && x != null) {
+            Rational x = poly.isPresent() ? grid.exactPoint(i) : null;
+            if (x != null) {
                 entries[i - s] = new Entry[cols.size()];
                 for (int c = 0; c < cols.size(); c++) {
                     Column col = cols.get(c);
