@@ -190,13 +190,17 @@ public final class TableEvaluator {
         Optional<Poly> poly = FunctionEvaluator.polynomial(t.function());
         Grid grid = t.grid();
         List<Integer> pending = new ArrayList<>();
+        List<Poly> derivatives = new ArrayList<>();
+        for (Poly p = poly.orElse(null); p != null && derivatives.size() <= Column.MAX_DERIVATIVE; p = p.derivative()) {
+            derivatives.add(p);
+        }
         for (int i = s; i < e; i++) {
             Rational x = poly.isPresent() ? grid.exactPoint(i) : null;
             if (x != null) {
                 entries[i - s] = new Entry[cols.size()];
                 for (int c = 0; c < cols.size(); c++) {
                     Column col = cols.get(c);
-                    Rational v = col.isPoint() ? x : derivative(poly.get(), col.order()).evaluate(x);
+                    Rational v = col.isPoint() ? x : derivatives.get(col.order()).evaluate(x);
                     if (col.taylor()) {
                         v = v.divide(factorial(col.order()));
                     }
