@@ -137,12 +137,15 @@ final class BuildCommand implements Callable<Integer> {
     private void evaluate(List<Job> work, int n, PrintWriter err, List<TableResult> results) throws ExprException,
             TableEvaluator.UndecidedException, TableEvaluator.OutOfRangeException {
         ProgressDisplay progress = ProgressDisplay.forBuild("odetab: evaluating", "rows", quiet);
+        // Tables run on one pool and the chunks of large grids on another, so that a table
+        // waiting for its chunks never holds a thread that a chunk needs.
         ExecutorService pool = Executors.newFixedThreadPool(Math.max(1, Math.min(n, work.size())));
+        ExecutorService chunkPool = n == 1 ? null : Executors.newFixedThreadPool(n);
         List<String> lines = new ArrayList<>();
         try {
             List<Future<TableResult>> futures = new ArrayList<>();
             for (Job j : work) {
-                futures.add(pool.submit(() -> TableEvaluator.evaluate(j.table(), progress)));
+                futures.add(pool.submit(() -> TableEvaluator.evaluate(j.table(), progress, chunkPool)));
             }
             for (Future<TableResult> f : futures) {
                 TableResult r = get(f);
@@ -152,6 +155,9 @@ final class BuildCommand implements Callable<Integer> {
             }
         } finally {
             pool.shutdownNow();
+            if (chunkPool != null) {
+                chunkPool.shutdownNow();
+            }
             progress.close();
             if (verbose) {
                 lines.forEach(err::println);

@@ -204,12 +204,49 @@ public final class Poly {
 
     /** Exact value at a rational point (Horner). */
     public Rational evaluate(Rational x) {
-        Rational r = Rational.ZERO;
-        for (int i = c.length - 1; i >= 0; i--) {
-            r = r.multiply(x).add(c[i]);
+        if (c.length == 0) {
+            return Rational.ZERO;
         }
+        // With integer C_i = L c_i and x = p/q: p(x) = (Σ C_i p^i q^(n−i)) / (L q^n), by
+        // homogeneous Horner in integers and one reduction at the end.
+        BigInteger[] big = integerCoefficients();
+        BigInteger p = x.numerator();
+        BigInteger q = x.denominator();
+        int n = c.length - 1;
+        BigInteger acc = big[n];
+        BigInteger qPower = BigInteger.ONE;
+        for (int i = n - 1; i >= 0; i--) {
+            qPower = qPower.multiply(q);
+            acc = acc.multiply(p);
+            if (big[i].signum() != 0) {
+                acc = acc.add(big[i].multiply(qPower));
+            }
+        }
+        return Rational.of(acc, big[n + 1].multiply(qPower));
+    }
+
+    /** L c_0 … L c_n and then L, the least common multiple of the denominators (computed once). */
+    private BigInteger[] integerCoefficients() {
+        BigInteger[] known = integers;
+        if (known != null) {
+            return known;
+        }
+        BigInteger lcm = BigInteger.ONE;
+        for (Rational r : c) {
+            BigInteger den = r.denominator();
+            lcm = lcm.divide(lcm.gcd(den)).multiply(den);
+        }
+        BigInteger[] r = new BigInteger[c.length + 1];
+        for (int i = 0; i < c.length; i++) {
+            r[i] = c[i].numerator().multiply(lcm.divide(c[i].denominator()));
+        }
+        r[c.length] = lcm;
+        integers = r;
         return r;
     }
+
+    /** Cache for {@link #evaluate(Rational)}; a benign race (every thread computes the same array). */
+    private volatile BigInteger[] integers;
 
     /** Enclosure of the value at every point of a ball (Horner in ball arithmetic). */
     public Ball evaluate(Ball x, int precBits) {

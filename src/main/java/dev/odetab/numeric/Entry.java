@@ -147,26 +147,73 @@ public record Entry(Format format, Kind kind, boolean negative, Rational value, 
         BigInteger[] nq = significandAndQuantum(f);
         BigInteger n = nq[0];
         int q = nq[1].intValueExact();
-        Rational v = value.abs();
-        Rational ulp = Rational.TWO.pow(q);
         boolean powerOfTwoStep = n.bitCount() == 1 && n.bitLength() == f.precisionBits()
                 && q > Rounding.quantumMin(f);
-        Rational low = v.subtract(powerOfTwoStep ? ulp.divide(Rational.of(4)) : ulp.divide(Rational.TWO));
-        Rational high = v.add(ulp.divide(Rational.TWO));
+        // In units of 2^(q−2): v = 4n, the interval ends 4n − 2 (4n − 1 below a power of two) and 4n + 2.
+        BigInteger four = n.shiftLeft(2);
+        Fraction low = new Fraction(four.subtract(BigInteger.valueOf(powerOfTwoStep ? 1 : 2)), q - 2);
+        Fraction high = new Fraction(four.add(BigInteger.TWO), q - 2);
+        Fraction v = new Fraction(four, q - 2);
         boolean closed = !n.testBit(0);
-        int k = decimalExponentAbove(high);
-        while (true) {
-            Rational scale = Rational.of(10).pow(k);
-            BigInteger mLow = ceilOf(low.divide(scale), !closed);
-            BigInteger mHigh = floorOf(high.divide(scale), !closed);
-            if (mLow.compareTo(mHigh) <= 0) {
-                BigInteger nearest = Rounding.roundMagnitude(v.divide(scale).numerator(),
-                        v.divide(scale).denominator(), false, RoundingMode.NEAREST_EVEN);
-                BigInteger m = nearest.max(mLow).min(mHigh);
-                return sign + scientificOrPlain(m, k);
+        // The largest k with a multiple of 10^k in the interval: feasible(k + 1) implies feasible(k),
+        // so start near log10 of the width, then climb while feasible and descend while not.
+        int k = (int) Math.floor((q - 2 + Math.log10(powerOfTwoStep ? 3 : 4) / Math.log10(2)) * 0.30102999566398120);
+        BigInteger[] range = multiples(low, high, k, closed);
+        if (range != null) {
+            BigInteger[] up;
+            while ((up = multiples(low, high, k + 1, closed)) != null) {
+                k++;
+                range = up;
             }
-            k--;
+        } else {
+            while ((range = multiples(low, high, --k, closed)) == null) {
+                // descend
+            }
         }
+        BigInteger nearest = v.roundedOver(k);
+        BigInteger m = nearest.max(range[0]).min(range[1]);
+        return sign + scientificOrPlain(m, k);
+    }
+
+    /** The exact value a · 2^e (a &gt; 0), for the interval arithmetic of {@link #shortestDecimal}. */
+    private record Fraction(BigInteger a, int e) {
+        /** num/den of x / 10^k with integer num and positive den. */
+        BigInteger[] over(int k) {
+            BigInteger num = a;
+            BigInteger den = BigInteger.ONE;
+            if (e >= 0) {
+                num = num.shiftLeft(e);
+            } else {
+                den = den.shiftLeft(-e);
+            }
+            if (k >= 0) {
+                den = den.multiply(BigInteger.TEN.pow(k));
+            } else {
+                num = num.multiply(BigInteger.TEN.pow(-k));
+            }
+            return new BigInteger[] {num, den};
+        }
+
+        /** x / 10^k rounded to the nearest integer, ties to even. */
+        BigInteger roundedOver(int k) {
+            BigInteger[] nd = over(k);
+            return Rounding.roundMagnitude(nd[0], nd[1], false, RoundingMode.NEAREST_EVEN);
+        }
+    }
+
+    /**
+     * The integers m with m · 10^k in the interval from low to high (ends included when
+     * {@code closed}) as {first, last}, or null when there is none.
+     */
+    private static BigInteger[] multiples(Fraction low, Fraction high, int k, boolean closed) {
+        BigInteger[] l = low.over(k);
+        BigInteger[] h = high.over(k);
+        BigInteger[] lq = l[0].divideAndRemainder(l[1]);
+        BigInteger[] hq = h[0].divideAndRemainder(h[1]);
+        // ceil(low/10^k), or the next integer when low is excluded and is itself a multiple
+        BigInteger first = lq[1].signum() == 0 ? (closed ? lq[0] : lq[0].add(BigInteger.ONE)) : lq[0].add(BigInteger.ONE);
+        BigInteger last = hq[1].signum() == 0 && !closed ? hq[0].subtract(BigInteger.ONE) : hq[0];
+        return first.compareTo(last) <= 0 ? new BigInteger[] {first, last} : null;
     }
 
     /**
@@ -218,42 +265,29 @@ public record Entry(Format format, Kind kind, boolean negative, Rational value, 
             return new BigInteger[] {BigInteger.ZERO, BigInteger.valueOf(Rounding.quantumMin(f))};
         }
         Rational v = value.abs();
-        int q = Math.max(Rounding.floorLog2(v.numerator(), v.denominator()) - f.precisionBits() + 1,
-                Rounding.quantumMin(f));
-        Rational n = v.multiply(Rational.TWO.pow(-q));
-        if (!n.isInteger()) {
+        BigInteger den = v.denominator();
+        int d = den.bitLength() - 1;
+        if (den.bitCount() != 1) {
             throw new IllegalStateException("not a value of " + f.name() + ": " + value);
         }
-        return new BigInteger[] {n.numerator(), BigInteger.valueOf(q)};
+        // |value| = num / 2^d, so floor(log2 |value|) = bitLength(num) − 1 − d, and n = num · 2^(−q−d).
+        BigInteger num = v.numerator();
+        int q = Math.max(num.bitLength() - 1 - d - f.precisionBits() + 1, Rounding.quantumMin(f));
+        int shift = -q - d;
+        BigInteger n;
+        if (shift >= 0) {
+            n = num.shiftLeft(shift);
+        } else {
+            if (num.getLowestSetBit() < -shift) {
+                throw new IllegalStateException("not a value of " + f.name() + ": " + value);
+            }
+            n = num.shiftRight(-shift);
+        }
+        return new BigInteger[] {n, BigInteger.valueOf(q)};
     }
 
-    /** The least k with 10^k &gt; x, for x &gt; 0 (a double estimate, then exact correction). */
-    private static int decimalExponentAbove(Rational x) {
-        int log2 = Rounding.floorLog2(x.numerator(), x.denominator());
-        int k = (int) Math.ceil((log2 + 1) * 0.30102999566398120);
-        while (Rational.of(10).pow(k).compareTo(x) <= 0) {
-            k++;
-        }
-        while (Rational.of(10).pow(k - 1).compareTo(x) > 0) {
-            k--;
-        }
-        return k;
-    }
 
-    /** The least integer &gt;= t, or &gt; t when {@code strict}. */
-    private static BigInteger ceilOf(Rational t, boolean strict) {
-        BigInteger fl = t.floor();
-        if (t.isInteger()) {
-            return strict ? fl.add(BigInteger.ONE) : fl;
-        }
-        return fl.add(BigInteger.ONE);
-    }
 
-    /** The greatest integer &lt;= t, or &lt; t when {@code strict}. */
-    private static BigInteger floorOf(Rational t, boolean strict) {
-        BigInteger fl = t.floor();
-        return t.isInteger() && strict ? fl.subtract(BigInteger.ONE) : fl;
-    }
 
     private static String scientificOrPlain(BigInteger m, int k) {
         String digits = m.toString();

@@ -33,7 +33,56 @@ public final class Rational implements Comparable<Rational> {
     }
 
     public static Rational of(long num, long den) {
-        return of(BigInteger.valueOf(num), BigInteger.valueOf(den));
+        if (den == 0) {
+            throw new ArithmeticException("division by zero");
+        }
+        if (num == Long.MIN_VALUE || den == Long.MIN_VALUE) {
+            return of(BigInteger.valueOf(num), BigInteger.valueOf(den));
+        }
+        if (den < 0) {
+            num = -num;
+            den = -den;
+        }
+        long a = Math.abs(num);
+        long b = den;
+        while (b != 0) {
+            long r = a % b;
+            a = b;
+            b = r;
+        }
+        if (num == 0) {
+            return ZERO;
+        }
+        return new Rational(BigInteger.valueOf(num / a), BigInteger.valueOf(den / a));
+    }
+
+    /**
+     * Exact: the value of a finite double (IEEE 754-2019 §3.4: significand times a power of
+     * two), in lowest terms.
+     *
+     * @throws IllegalArgumentException for an infinity or NaN
+     */
+    public static Rational ofDouble(double d) {
+        if (!Double.isFinite(d)) {
+            throw new IllegalArgumentException("not a finite double: " + d);
+        }
+        if (d == 0) {
+            return ZERO;
+        }
+        long bits = Double.doubleToRawLongBits(d);
+        int biased = (int) ((bits >>> 52) & 0x7ff);
+        long significand = bits & ((1L << 52) - 1);
+        if (biased == 0) {
+            biased = 1;
+        } else {
+            significand |= 1L << 52;
+        }
+        int e2 = biased - 1075;
+        int tz = Long.numberOfTrailingZeros(significand);
+        significand >>= tz;
+        e2 += tz;
+        BigInteger num = BigInteger.valueOf(d < 0 ? -significand : significand);
+        return e2 >= 0 ? new Rational(num.shiftLeft(e2), BigInteger.ONE) : new Rational(num, BigInteger.ONE.shiftLeft(-e2));
     }
 
     /** p/q reduced to lowest terms; q must not be zero. */

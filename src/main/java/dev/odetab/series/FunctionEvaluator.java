@@ -84,10 +84,32 @@ public final class FunctionEvaluator {
             Jet exact = new Jet(Ball.of(poly.get().evaluate(x), precBits), Ball.of(poly.get().derivative().evaluate(x), precBits));
             return new Enclosure(exact, precBits, 0, 0);
         }
-        Jet start = new Jet(f.value().evaluate(precBits + CONSTANT_GUARD_BITS),
-                f.slope().evaluate(precBits + CONSTANT_GUARD_BITS));
+        Jet start = constants(f, precBits);
         Continuation.Result r = Continuation.evaluate(f.equation(), f.at(), start, x, precBits);
         return new Enclosure(r.jet(), precBits, r.steps(), r.terms());
+    }
+
+    private record ConstantsKey(FunctionDef f, int precBits) {
+    }
+
+    private static final Map<ConstantsKey, Jet> CONSTANTS = new ConcurrentHashMap<>();
+
+    /**
+     * Balls containing the normalization constants y(at) and y'(at), evaluated once per function
+     * and precision (they are pure functions of both; gamma at 200 bits costs milliseconds).
+     */
+    private static Jet constants(FunctionDef f, int precBits) throws ExprException {
+        ConstantsKey key = new ConstantsKey(f, precBits);
+        Jet known = CONSTANTS.get(key);
+        if (known != null) {
+            return known;
+        }
+        Jet start = new Jet(f.value().evaluate(precBits + CONSTANT_GUARD_BITS), f.slope().evaluate(precBits + CONSTANT_GUARD_BITS));
+        if (CONSTANTS.size() > 4096) {
+            CONSTANTS.clear();
+        }
+        CONSTANTS.put(key, start);
+        return start;
     }
 
     /** A correctly rounded table entry and the work it took. */

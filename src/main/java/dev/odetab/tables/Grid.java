@@ -4,6 +4,7 @@ import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.BallFunctions;
 import dev.odetab.numeric.Rational;
 import java.math.BigDecimal;
+import java.math.BigInteger;
 import java.math.MathContext;
 import java.util.AbstractList;
 import java.util.ArrayList;
@@ -26,6 +27,15 @@ public sealed interface Grid {
     /** The exact point i, or null when it is irrational. */
     default Rational exactPoint(int i) {
         return points().get(i);
+    }
+
+    /**
+     * The rational used for point i: the point itself when it is exact, otherwise a rational near
+     * the irrational node (the center of the last series step); the i-th element of {@link #points()}.
+     */
+    default Rational center(int i) {
+        Rational exact = exactPoint(i);
+        return exact != null ? exact : points().get(i);
     }
 
     /** A ball containing point i (exact points give exact balls). */
@@ -63,6 +73,21 @@ public sealed interface Grid {
 
         @Override
         public Rational exactPoint(int i) {
+            // from = a/b, step = c/d: x_i = (a d + i c b) / (b d), in longs when nothing can overflow.
+            BigInteger a = from.numerator();
+            BigInteger b = from.denominator();
+            BigInteger c = step.numerator();
+            BigInteger d = step.denominator();
+            if (a.bitLength() < 63 && b.bitLength() < 63 && c.bitLength() < 63 && d.bitLength() < 63) {
+                try {
+                    long bd = Math.multiplyExact(b.longValue(), d.longValue());
+                    long num = Math.addExact(Math.multiplyExact(a.longValue(), d.longValue()),
+                            Math.multiplyExact(Math.multiplyExact((long) i, c.longValue()), b.longValue()));
+                    return Rational.of(num, bd);
+                } catch (ArithmeticException overflow) {
+                    // exact BigInteger arithmetic below
+                }
+            }
             return from.add(step.multiply(Rational.of(i)));
         }
 
@@ -153,15 +178,15 @@ public sealed interface Grid {
         public List<Rational> points() {
             List<Rational> r = new ArrayList<>(n);
             for (int i = 0; i < n; i++) {
-                Rational exact = exactPoint(i);
-                if (exact != null) {
-                    r.add(exact);
-                } else {
-                    BigDecimal m = node(i, 128).mid().round(new MathContext(30));
-                    r.add(Rational.of(m));
-                }
+                r.add(center(i));
             }
             return r;
+        }
+
+        @Override
+        public Rational center(int i) {
+            Rational exact = exactPoint(i);
+            return exact != null ? exact : Rational.of(node(i, 128).mid().round(new MathContext(30)));
         }
 
         @Override

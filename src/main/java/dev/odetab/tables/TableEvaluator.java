@@ -20,6 +20,13 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
+import java.util.concurrent.Callable;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Future;
+import java.util.ArrayDeque;
+import java.util.Deque;
 
 /**
  * Evaluation of a values table: every entry correctly rounded from a proven enclosure.
@@ -55,62 +62,174 @@ public final class TableEvaluator {
 
     /**
      * Rigorous: every entry of the table, each the correct rounding of the exact value (see the
-     * class comment for how it is decided); zeros tables go to {@link ZeroFinder}.
+     * class comment for how it is decided); zeros tables go to {@link ZeroFinder}. Evaluated in
+     * the calling thread.
      *
      * @throws UndecidedException when the table's precision cap cannot decide some entries (named)
      * @throws OutOfRangeException when a fixed-point entry is out of range and the policy is "error"
      */
     public static TableResult evaluate(TableDef t) throws ExprException, UndecidedException, OutOfRangeException {
-        return evaluate(t, Progress.NONE);
+        return evaluate(t, Progress.NONE, null);
+    }
+
+    /** As {@link #evaluate(TableDef)}, reporting rows to {@code progress} as they are decided. */
+    public static TableResult evaluate(TableDef t, Progress progress) throws ExprException, UndecidedException, OutOfRangeException {
+        return evaluate(t, progress, null);
     }
 
     /**
-     * Rigorous: as {@link #evaluate(TableDef)}, reporting each row to {@code progress} as it is
-     * decided (a zeros table reports its rows when the search ends: their number is not known
-     * before). Rows go to a {@link RowStore} in grid order as soon as every row before them is
-     * decided, so the result of a long table is not held in memory.
+     * As {@link #evaluate(TableDef)}, with the chunks of the grid evaluated on {@code pool} (null:
+     * in the calling thread) and progress reported as rows are decided. The chunks are fixed by
+     * the grid alone ({@link #chunkSize}), and each chunk is a deterministic computation, so the
+     * result does not depend on the pool.
      */
-    public static TableResult evaluate(TableDef t, Progress progress) throws ExprException, UndecidedException, OutOfRangeException {
+    public static TableResult evaluate(TableDef t, Progress progress, ExecutorService pool)
+            throws ExprException, UndecidedException, OutOfRangeException {
         if (t.grid() instanceof Grid.ZeroSearch z) {
+            // The number of zeros is not known before the search: they are reported when it ends.
             TableResult zeros = ZeroFinder.find(t, z);
             progress.start(t.name(), zeros.rows().size());
             progress.advance(zeros.rows().size());
             return zeros;
         }
-        List<Rational> xs = t.grid().points();
-        int n = xs.size();
+        int n = t.grid().size();
+        progress.start(t.name(), n);
+        int size = chunkSize(t.grid());
+        int chunks = (n + size - 1) / size;
+        List<Jet> starts = FastTier.applies(t) && FunctionEvaluator.polynomial(t.function()).isEmpty()
+                ? FastTier.chunkStarts(t, size, chunks) : null;
+        RowStore store = RowStore.forTable(t);
+        BigDecimal maxRel = BigDecimal.ZERO;
+        int maxPrec = 0;
+        Deque<Future<Chunk>> window = new ArrayDeque<>();
+        int next = 0;
+        int inFlight = pool == null ? 1 : 2 * Math.max(1, Runtime.getRuntime().availableProcessors());
+        try {
+            while (next < chunks || !window.isEmpty()) {
+                while (next < chunks && window.size() < inFlight) {
+                    int s = next * size;
+                    int e = Math.min(n, s + size);
+                    Jet start = starts == null ? null : starts.get(next);
+                    Callable<Chunk> task = () -> chunk(t, s, e, start);
+                    window.add(pool == null || chunks == 1 ? completed(task) : pool.submit(task));
+                    next++;
+                }
+                Chunk c = await(window.poll());
+                for (TableResult.Row row : c.rows()) {
+                    store.append(row);
+                }
+                maxRel = maxRel.max(c.maxRel());
+                maxPrec = Math.max(maxPrec, c.maxPrec());
+                progress.advance(c.rows().length);
+            }
+        } finally {
+            for (Future<Chunk> f : window) {
+                f.cancel(true);
+            }
+        }
+        return new TableResult(t, store.finish(), maxRel, maxPrec);
+    }
+
+    /**
+     * Heuristic: rows per chunk, a function of the grid alone (never of the number of threads),
+     * so that every build walks the same chunks. 2048 rows, or fewer on a uniform grid so that a
+     * chunk spans about one unit of x (the fast tier's balls widen with the distance walked), but
+     * at least 32.
+     */
+    static int chunkSize(Grid g) {
+        if (g instanceof Grid.Uniform u) {
+            double perUnit = 1 / Math.abs(u.step().doubleEstimate());
+            return (int) Math.max(32, Math.min(2048, Math.ceil(perUnit)));
+        }
+        return 2048;
+    }
+
+    /** The rows of one chunk and its statistics. */
+    private record Chunk(TableResult.Row[] rows, BigDecimal maxRel, int maxPrec) {
+    }
+
+    private static Future<Chunk> completed(Callable<Chunk> task) {
+        CompletableFuture<Chunk> f = new CompletableFuture<>();
+        try {
+            f.complete(task.call());
+        } catch (Exception | Error e) {
+            f.completeExceptionally(e);
+        }
+        return f;
+    }
+
+    private static Chunk await(Future<Chunk> f) throws ExprException, UndecidedException, OutOfRangeException {
+        try {
+            return f.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("interrupted", e);
+        } catch (ExecutionException e) {
+            Throwable c = e.getCause();
+            if (c instanceof ExprException x) {
+                throw x;
+            }
+            if (c instanceof UndecidedException x) {
+                throw x;
+            }
+            if (c instanceof OutOfRangeException x) {
+                throw x;
+            }
+            if (c instanceof RuntimeException x) {
+                throw x;
+            }
+            if (c instanceof Error x) {
+                throw x;
+            }
+            throw new IllegalStateException(c);
+        }
+    }
+
+    /**
+     * Rigorous: rows s … e−1. Exact rows for polynomials at exact points; then the fast tier
+     * ({@link FastTier}) from the chunk's start when there is one; then BigDecimal walks at doubling precision for the
+     * rows still undecided, up to the cap.
+     */
+    private static Chunk chunk(TableDef t, int s, int e, Jet start) throws ExprException, UndecidedException, OutOfRangeException {
+        int len = e - s;
         List<Column> cols = t.columns();
-        Entry[][] entries = new Entry[n][];
+        Entry[][] entries = new Entry[len][];
         BigDecimal maxRel = BigDecimal.ZERO;
         int maxPrec = 0;
         Optional<Poly> poly = FunctionEvaluator.polynomial(t.function());
         Grid grid = t.grid();
         List<Integer> pending = new ArrayList<>();
-        RowStore store = RowStore.forTable(t);
-        int stored = 0;
-        progress.start(t.name(), n);
-        for (int i = 0; i < n; i++) {
-            if (poly.isPresent() && grid.exactPoint(i) != null) {
-                entries[i] = new Entry[cols.size()];
+        List<Poly> derivatives = new ArrayList<>();
+        for (Poly p = poly.orElse(null); p != null && derivatives.size() <= Column.MAX_DERIVATIVE; p = p.derivative()) {
+            derivatives.add(p);
+        }
+        for (int i = s; i < e; i++) {
+            Rational x = poly.isPresent() ? grid.exactPoint(i) : null;
+            if (x != null) {
+                entries[i - s] = new Entry[cols.size()];
                 for (int c = 0; c < cols.size(); c++) {
                     Column col = cols.get(c);
-                    Rational v = col.isPoint() ? xs.get(i) : derivative(poly.get(), col.order()).evaluate(xs.get(i));
+                    Rational v = col.isPoint() ? x : derivatives.get(col.order()).evaluate(x);
                     if (col.taylor()) {
                         v = v.divide(factorial(col.order()));
                     }
-                    entries[i][c] = checked(t, xs.get(i), col, Rounding.round(v, t.format(), t.rounding(), t.outOfRange()));
+                    entries[i - s][c] = checked(t, x, col, Rounding.round(v, t.format(), t.rounding(), t.outOfRange()));
                 }
-                progress.advance(1);
             } else {
                 pending.add(i);
             }
-            stored = store(store, grid, entries, stored);
+        }
+        if (!pending.isEmpty() && start != null) {
+            FastTier.Outcome fast = FastTier.run(t, s, e, start, entries);
+            maxRel = maxRel.max(fast.maxRel());
+            maxPrec = Math.max(maxPrec, fast.precBits());
+            pending = fast.undecided();
         }
         int prec = startBits(t.format());
         while (!pending.isEmpty()) {
             List<Rational> pts = new ArrayList<>();
             for (int i : pending) {
-                pts.add(xs.get(i));
+                pts.add(grid.center(i));
             }
             List<Jet> jets = poly.isPresent() ? null : GridWalk.enclose(t.function(), pts, prec);
             List<Integer> still = new ArrayList<>();
@@ -118,63 +237,54 @@ public final class TableEvaluator {
                 int i = pending.get(k);
                 Ball node = grid.node(i, prec);
                 Jet jet = poly.isPresent() ? polynomialJet(poly.get(), node, prec)
-                        : grid.exactPoint(i) != null ? jets.get(k) : nodeJet(t.function(), xs.get(i), jets.get(k), node, prec);
+                        : grid.exactPoint(i) != null ? jets.get(k) : nodeJet(t.function(), pts.get(k), jets.get(k), node, prec);
                 Entry[] row = new Entry[cols.size()];
                 BigDecimal rowRel = BigDecimal.ZERO;
                 boolean decided = true;
                 Ball[] derivs = null;
                 for (int c = 0; c < cols.size() && decided; c++) {
                     Column col = cols.get(c);
-                    Optional<Entry> e;
                     Ball b;
                     if (col.isPoint()) {
                         b = node;
                     } else {
                         if (derivs == null) {
-                            derivs = derivatives(t.function(), xs.get(i), jet, maxOrder(cols), prec);
+                            derivs = derivatives(t.function(), pts.get(k), jet, maxOrder(cols), prec);
                         }
                         b = col.taylor() ? derivs[col.order()].divide(factorial(col.order()), prec) : derivs[col.order()];
                     }
-                    e = Rounding.decide(b, t.format(), t.rounding(), t.outOfRange());
-                    if (e.isEmpty()) {
+                    Optional<Entry> en = Rounding.decide(b, t.format(), t.rounding(), t.outOfRange());
+                    if (en.isEmpty()) {
                         decided = false;
                     } else {
-                        row[c] = e.get();
+                        row[c] = en.get();
                         rowRel = col.isPoint() ? rowRel : rowRel.max(relative(b));
                     }
                 }
                 if (decided) {
                     for (int c = 0; c < cols.size(); c++) {
-                        row[c] = checked(t, xs.get(i), cols.get(c), row[c]);
+                        row[c] = checked(t, pts.get(k), cols.get(c), row[c]);
                     }
-                    entries[i] = row;
+                    entries[i - s] = row;
                     maxRel = maxRel.max(rowRel);
                     maxPrec = Math.max(maxPrec, prec);
-                    progress.advance(1);
                 } else {
                     still.add(i);
                 }
             }
-            stored = store(store, grid, entries, stored);
             pending = still;
             if (!pending.isEmpty()) {
                 if (prec >= t.capBits()) {
-                    throw new UndecidedException(undecidedMessage(t, xs, pending));
+                    throw new UndecidedException(undecidedMessage(t, pending));
                 }
                 prec = Math.min(t.capBits(), 2 * prec);
             }
         }
-        return new TableResult(t, store.finish(), maxRel, maxPrec);
-    }
-
-    /** Moves the rows decided so far, from row {@code from} on in grid order, into the store; returns the first row not there. */
-    private static int store(RowStore store, Grid grid, Entry[][] entries, int from) {
-        int i = from;
-        while (i < entries.length && entries[i] != null) {
-            store.append(new TableResult.Row(grid.exactPoint(i), Arrays.asList(entries[i])));
-            entries[i++] = null;
+        TableResult.Row[] rows = new TableResult.Row[len];
+        for (int i = s; i < e; i++) {
+            rows[i - s] = new TableResult.Row(grid.exactPoint(i), Arrays.asList(entries[i - s]));
         }
-        return i;
+        return new Chunk(rows, maxRel, maxPrec);
     }
 
     /** Value and slope of an exact polynomial over a ball (Horner in ball arithmetic). */
@@ -232,7 +342,7 @@ public final class TableEvaluator {
         return d;
     }
 
-    private static BigDecimal relative(Ball b) {
+    static BigDecimal relative(Ball b) {
         if (b.rad().signum() == 0) {
             return BigDecimal.ZERO;
         }
@@ -259,7 +369,7 @@ public final class TableEvaluator {
         return bits + 40;
     }
 
-    private static Entry checked(TableDef t, Rational x, Column col, Entry e) throws OutOfRangeException {
+    static Entry checked(TableDef t, Rational x, Column col, Entry e) throws OutOfRangeException {
         if (e.kind() == Entry.Kind.OUT_OF_RANGE) {
             throw new OutOfRangeException("table " + t.name() + ": the " + col.name() + " at x = " + x.toDecimalOrFraction()
                     + " lies outside the range of " + t.format().name()
@@ -268,11 +378,11 @@ public final class TableEvaluator {
         return e;
     }
 
-    private static String undecidedMessage(TableDef t, List<Rational> xs, List<Integer> pending) {
+    private static String undecidedMessage(TableDef t, List<Integer> pending) {
         StringBuilder sb = new StringBuilder("table " + t.name() + ": the precision cap of " + t.capBits()
                 + " bits cannot decide the rounding of " + pending.size() + " row(s), at x =");
         for (int k = 0; k < Math.min(10, pending.size()); k++) {
-            sb.append(' ').append(xs.get(pending.get(k)).toDecimalOrFraction());
+            sb.append(' ').append(t.grid().center(pending.get(k)).toDecimalOrFraction());
         }
         if (pending.size() > 10) {
             sb.append(" …");
