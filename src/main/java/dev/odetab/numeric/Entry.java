@@ -103,8 +103,11 @@ public record Entry(Format format, Kind kind, boolean negative, Rational value, 
         boolean normal = n.bitLength() == p;
         int exponent = normal ? nq[1].intValueExact() + p - 1 : f.emin();
         int hexDigits = (p - 1 + 3) / 4;
-        BigInteger fraction = n.clearBit(p - 1).shiftLeft(4 * hexDigits - (p - 1));
-        StringBuilder digits = new StringBuilder(fraction.toString(16));
+        // For p <= 53 the fraction field fits in a long (the common binary16/32/64 case).
+        String hex = p <= 53
+                ? Long.toHexString((n.longValue() & ~(1L << (p - 1))) << (4 * hexDigits - (p - 1)))
+                : n.clearBit(p - 1).shiftLeft(4 * hexDigits - (p - 1)).toString(16);
+        StringBuilder digits = new StringBuilder(hex);
         while (digits.length() < hexDigits) {
             digits.insert(0, '0');
         }
@@ -187,18 +190,78 @@ public record Entry(Format format, Kind kind, boolean negative, Rational value, 
                 den = den.shiftLeft(-e);
             }
             if (k >= 0) {
-                den = den.multiply(BigInteger.TEN.pow(k));
+                den = den.multiply(tenTo(k));
             } else {
-                num = num.multiply(BigInteger.TEN.pow(-k));
+                num = num.multiply(tenTo(-k));
             }
             return new BigInteger[] {num, den};
         }
 
+        /** As {@link #over}, in longs; null when a number would not fit (then {@link #over} is used). */
+        long[] overLong(int k) {
+            if (a.bitLength() > 62 || Math.abs(k) > 18 || e <= -63) {
+                return null;
+            }
+            long num = a.longValue();
+            long den = 1;
+            if (e >= 0) {
+                if (e >= 62 || (num >>> (62 - e)) != 0) {
+                    return null;
+                }
+                num <<= e;
+            } else {
+                den = 1L << -e;
+            }
+            try {
+                if (k >= 0) {
+                    den = Math.multiplyExact(den, POWERS_OF_TEN[k]);
+                } else {
+                    num = Math.multiplyExact(num, POWERS_OF_TEN[-k]);
+                }
+            } catch (ArithmeticException overflow) {
+                return null;
+            }
+            return new long[] {num, den};
+        }
+
         /** x / 10^k rounded to the nearest integer, ties to even. */
         BigInteger roundedOver(int k) {
+            long[] small = overLong(k);
+            if (small != null) {
+                long quotient = small[0] / small[1];
+                long twice = 2 * (small[0] % small[1]); // den < 2^63 and rem < den: 2·rem may wrap only when den > 2^62
+                if (small[1] <= 1L << 62) {
+                    int c = Long.compare(twice, small[1]);
+                    return BigInteger.valueOf(c > 0 || (c == 0 && (quotient & 1) == 1) ? quotient + 1 : quotient);
+                }
+            }
             BigInteger[] nd = over(k);
             return Rounding.roundMagnitude(nd[0], nd[1], false, RoundingMode.NEAREST_EVEN);
         }
+    }
+
+    private static final long[] POWERS_OF_TEN = new long[19];
+
+    static {
+        POWERS_OF_TEN[0] = 1;
+        for (int i = 1; i < POWERS_OF_TEN.length; i++) {
+            POWERS_OF_TEN[i] = 10 * POWERS_OF_TEN[i - 1];
+        }
+    }
+
+    private static final BigInteger[] TENS = new BigInteger[5000];
+
+    /** 10^k for k &gt;= 0, cached (the shortest decimals of binary128 need k up to about 4966). */
+    private static BigInteger tenTo(int k) {
+        if (k >= TENS.length) {
+            return BigInteger.TEN.pow(k);
+        }
+        BigInteger t = TENS[k];
+        if (t == null) {
+            t = BigInteger.TEN.pow(k);
+            TENS[k] = t;
+        }
+        return t;
     }
 
     /**
@@ -206,6 +269,19 @@ public record Entry(Format format, Kind kind, boolean negative, Rational value, 
      * {@code closed}) as {first, last}, or null when there is none.
      */
     private static BigInteger[] multiples(Fraction low, Fraction high, int k, boolean closed) {
+        long[] ls = low.overLong(k);
+        long[] hs = high.overLong(k);
+        if (ls != null && hs != null) {
+            long ln = ls[0];
+            long ld = ls[1];
+            long hn = hs[0];
+            long hd = hs[1];
+            long lq = ln / ld;
+            long hq = hn / hd;
+            long first = ln % ld == 0 && closed ? lq : lq + 1;
+            long last = hn % hd == 0 && !closed ? hq - 1 : hq;
+            return first <= last ? new BigInteger[] {BigInteger.valueOf(first), BigInteger.valueOf(last)} : null;
+        }
         BigInteger[] l = low.over(k);
         BigInteger[] h = high.over(k);
         BigInteger[] lq = l[0].divideAndRemainder(l[1]);
@@ -290,10 +366,18 @@ public record Entry(Format format, Kind kind, boolean negative, Rational value, 
 
 
     private static String scientificOrPlain(BigInteger m, int k) {
-        String digits = m.toString();
+        String digits = m.bitLength() < 63 ? Long.toString(m.longValue()) : m.toString();
         int exponent = k + digits.length() - 1;
         if (exponent >= -6 && exponent <= 20) {
-            return new BigDecimal(m, -k).toPlainString();
+            // m · 10^k written out in full (what BigDecimal(m, −k).toPlainString() gives)
+            int len = digits.length();
+            if (k >= 0) {
+                return digits + "0".repeat(k);
+            }
+            if (len > -k) {
+                return digits.substring(0, len + k) + "." + digits.substring(len + k);
+            }
+            return "0." + "0".repeat(-k - len) + digits;
         }
         StringBuilder sb = new StringBuilder().append(digits.charAt(0));
         if (digits.length() > 1) {

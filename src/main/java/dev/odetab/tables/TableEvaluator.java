@@ -132,14 +132,15 @@ public final class TableEvaluator {
 
     /**
      * Heuristic: rows per chunk, a function of the grid alone (never of the number of threads),
-     * so that every build walks the same chunks. 2048 rows, or fewer on a uniform grid so that a
-     * chunk spans about one unit of x (the fast tier's balls widen with the distance walked), but
-     * at least 32.
+     * so that every build walks the same chunks. On a uniform grid, as many rows as span about
+     * one unit of x (the fast tier's balls widen with the distance walked), at least 32 and at
+     * most 8192 (each chunk start costs a BigDecimal leg, so dense grids want long chunks); on
+     * other grids 2048 rows.
      */
     static int chunkSize(Grid g) {
         if (g instanceof Grid.Uniform u) {
             double perUnit = 1 / Math.abs(u.step().doubleEstimate());
-            return (int) Math.max(32, Math.min(2048, Math.ceil(perUnit)));
+            return (int) Math.max(32, Math.min(8192, Math.ceil(perUnit)));
         }
         return 2048;
     }
