@@ -94,6 +94,11 @@ public final class Rational implements Comparable<Rational> {
             num = num.negate();
             den = den.negate();
         }
+        if (den.bitCount() == 1 && num.signum() != 0) {
+            // A dyadic rational (every binary entry): the gcd is a power of two, found by shifts.
+            int shift = Math.min(num.getLowestSetBit(), den.getLowestSetBit());
+            return shift == 0 ? new Rational(num, den) : new Rational(num.shiftRight(shift), den.shiftRight(shift));
+        }
         BigInteger g = num.gcd(den);
         if (!g.equals(BigInteger.ONE) && g.signum() != 0) {
             num = num.divide(g);

@@ -80,7 +80,7 @@ public final class TableEvaluator {
     /**
      * As {@link #evaluate(TableDef)}, with the chunks of the grid evaluated on {@code pool} (null:
      * in the calling thread) and progress reported as rows are decided. The chunks are fixed by
-     * the grid alone ({@link #chunkSize}), and each chunk is a deterministic computation, so the
+     * the table alone ({@link #chunkSize}), and each chunk is a deterministic computation, so the
      * result does not depend on the pool.
      */
     public static TableResult evaluate(TableDef t, Progress progress, ExecutorService pool)
@@ -94,7 +94,7 @@ public final class TableEvaluator {
         }
         int n = t.grid().size();
         progress.start(t.name(), n);
-        int size = chunkSize(t.grid());
+        int size = chunkSize(t);
         int chunks = (n + size - 1) / size;
         List<Jet> starts = FastTier.applies(t) && FunctionEvaluator.polynomial(t.function()).isEmpty()
                 ? FastTier.chunkStarts(t, size, chunks) : null;
@@ -103,7 +103,7 @@ public final class TableEvaluator {
         int maxPrec = 0;
         Deque<Future<Chunk>> window = new ArrayDeque<>();
         int next = 0;
-        int inFlight = pool == null ? 1 : 2 * Math.max(1, Runtime.getRuntime().availableProcessors());
+        int inFlight = pool == null ? 1 : Math.max(2, Math.min(2 * Runtime.getRuntime().availableProcessors(), ROWS_IN_FLIGHT / size));
         try {
             while (next < chunks || !window.isEmpty()) {
                 while (next < chunks && window.size() < inFlight) {
@@ -131,19 +131,22 @@ public final class TableEvaluator {
     }
 
     /**
-     * Heuristic: rows per chunk, a function of the grid alone (never of the number of threads),
-     * so that every build walks the same chunks. On a uniform grid, as many rows as span about
-     * one unit of x (the fast tier's balls widen with the distance walked), at least 32 and at
-     * most 8192 (each chunk start costs a BigDecimal leg, so dense grids want long chunks); on
-     * other grids 2048 rows.
+     * Heuristic: rows per chunk, a function of the table alone (never of the number of threads),
+     * so that every build walks the same chunks. For the fast tier on a uniform grid, as many rows
+     * as span about one unit of x (its balls widen with the distance walked), at least 32 and at
+     * most 8192 (each chunk start costs a BigDecimal leg, so dense grids want long chunks);
+     * otherwise 2048 rows.
      */
-    static int chunkSize(Grid g) {
-        if (g instanceof Grid.Uniform u) {
+    static int chunkSize(TableDef t) {
+        if (t.grid() instanceof Grid.Uniform u && FastTier.applies(t) && FunctionEvaluator.polynomial(t.function()).isEmpty()) {
             double perUnit = 1 / Math.abs(u.step().doubleEstimate());
             return (int) Math.max(32, Math.min(8192, Math.ceil(perUnit)));
         }
         return 2048;
     }
+
+    /** At most this many rows are held by chunks in flight (memory does not grow with the table). */
+    private static final int ROWS_IN_FLIGHT = 16384;
 
     /** The rows of one chunk and its statistics. */
     private record Chunk(TableResult.Row[] rows, BigDecimal maxRel, int maxPrec) {
