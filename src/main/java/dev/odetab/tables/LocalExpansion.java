@@ -83,7 +83,7 @@ abstract sealed class LocalExpansion {
     /**
      * Heuristic: a cell width on which one series enclosure is likely to decide the sign of g
      * or of g': min(ρ/2, 1/(1 + √|P0/P2| + |P1/P2|)) at c, ρ the contraction radius of
-     * METHODS §2 (about a fifth of a period where the solution oscillates); +∞ for a
+     * METHODS §2 (about a sixth of a period where the solution oscillates); +∞ for a
      * polynomial, whose width the caller chooses. Never part of a bound.
      */
     abstract double cellWidthEstimate();
