@@ -15,7 +15,8 @@ import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
 
 /**
- * The reference file {@code reference-data/airy-zeros-apfloat-1.15.0.csv}: the first 50 zeros
+ * The reference file {@code reference-data/zeros/airy-zeros-apfloat-1.15.0.csv} (in its own folder:
+ * its layout is not the value layout that {@code odetab check} reads): the first 50 zeros
  * a_k, a'_k, b_k, b'_k of Ai, Ai', Bi, Bi' (DLMF 9.9(i)) and the other function at each
  * (Ai'(a_k), Ai(a'_k), Bi'(b_k), Bi(b'_k)), polished by Newton's method in apfloat 1.15.0 at
  * 70 digits and written with 50 significant digits.
@@ -28,7 +29,7 @@ import org.apfloat.ApfloatMath;
  * test ({@code AiryZerosReferenceDataTest}).
  */
 public final class AiryZerosReferenceData {
-    public static final Path FILE = Path.of("reference-data/airy-zeros-apfloat-1.15.0.csv");
+    public static final Path FILE = Path.of("reference-data/zeros/airy-zeros-apfloat-1.15.0.csv");
     public static final int COUNT = 50;
     static final long PRECISION = 70;
     static final int DIGITS = 50;
