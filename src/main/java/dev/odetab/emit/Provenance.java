@@ -29,7 +29,8 @@ public record Provenance(String specPath, String specSha256, String table, Strin
             format += " (out of range: saturate; " + saturated + " entr" + (saturated == 1 ? "y" : "ies") + " saturated, flagged in the CSV)";
         }
         return new Provenance(specPath.replace('\\', '/'), Outputs.sha256(specBytes), t.name(), t.functionName() + " (" + f.name() + ")",
-                f.equation().toString(), normalization, t.grid().describe(), format, t.rounding().spelling(),
+                f.equation().toString(), normalization,
+                r.proof() == null ? t.grid().describe() : t.grid().describe() + "; " + r.proof(), format, t.rounding().spelling(),
                 maxError, toolVersion);
     }
 

@@ -84,8 +84,14 @@ public final class Continuation {
         return remaining.signum() < 0 ? h.negate() : h;
     }
 
-    /** Throws when a real root of P2 lies on the closed segment between the two points. */
-    static void checkPath(Equation reduced, Equation original, Rational from, Rational to) {
+    /**
+     * Exact: throws when a real root of the reduced P2 lies on the closed segment between the
+     * two points (Sturm counts); names the root.
+     *
+     * @param reduced {@code original.reduced()}
+     * @throws SingularCrossingException when such a root exists
+     */
+    public static void checkPath(Equation reduced, Equation original, Rational from, Rational to) {
         Poly p2 = reduced.p2();
         Rational lo = from.min(to);
         Rational hi = from.max(to);

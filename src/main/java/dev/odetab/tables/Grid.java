@@ -227,9 +227,7 @@ public sealed interface Grid {
         @Override
         public String describe() {
             return "zeros of " + (ofDerivative ? "y'" : "y") + " met walking from " + from.toDecimalOrFraction() + " to "
-                    + to.toDecimalOrFraction() + (count > 0 ? ", the first " + count : "")
-                    + "; isolated on cells where a Taylor enclosure proves that " + (ofDerivative ? "y'" : "y")
-                    + " keeps its sign or is strictly monotone, so every zero is counted exactly once";
+                    + to.toDecimalOrFraction() + " (both ends included)" + (count > 0 ? ", the first " + count : "");
         }
     }
 

@@ -1,7 +1,9 @@
 package dev.odetab.tables;
 
 import dev.odetab.expr.ExprException;
+import dev.odetab.expr.Poly;
 import dev.odetab.numeric.Ball;
+import dev.odetab.numeric.Directed;
 import dev.odetab.numeric.Entry;
 import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.Rounding;
@@ -11,155 +13,306 @@ import dev.odetab.series.Continuation;
 import dev.odetab.series.FunctionEvaluator;
 import dev.odetab.series.Jet;
 import dev.odetab.series.LocalSeries;
-import dev.odetab.series.Recurrence;
+import dev.odetab.series.PrecisionCapException;
 import java.math.BigDecimal;
+import java.math.BigInteger;
+import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
 /**
- * Certified zeros of a solution (or of its derivative) and their correctly rounded values.
+ * Certified zeros of a solution g = y (or g = y', its turning points) met walking a search
+ * interval, each correctly rounded, with the other columns at the zero.
  *
- * <p>Trust level: Rigorous (METHODS §6). Isolation: the search interval is cut into cells
- * (width 1/16, halved where needed). On a cell [a, b] with center m and half-width r, the
- * Taylor series at m evaluated over the ball [m − r, m + r] (ball Horner plus the tail bound
- * of METHODS §2) encloses g and g' over the whole cell (g = y, or g = y' with
- * g' = y'' = −(P1 y' + P0 y)/P2 from the equation). If the enclosure of g excludes 0 the cell has
- * no zero; if that of g' excludes 0, g is strictly monotone there and has a zero exactly when
- * its signs at a and b (proven from enclosures) differ; otherwise the cell is halved. So every
- * zero is found exactly once, and a double zero or a pair closer than the smallest cell is
- * reported, never passed over. Refinement: bisection at exact rational points keeps a
- * bracket with proven opposite signs until every point of the bracket rounds to the same
- * entry (so the zero's entry is decided, METHODS §5); the other columns are enclosed over the
- * bracket and rounded the same way.
+ * <p>Trust level: Rigorous (METHODS §6). <b>Isolation.</b> One continuation state walks the
+ * interval cell by cell ({@link LocalExpansion}: balls of y, y' at exact rational cell starts,
+ * the next start reached by one series step). On a cell the Taylor series at its start,
+ * evaluated over the whole cell (a ball step), encloses g and g' at every point of the cell
+ * (g' = y'' from the equation when g = y'). A cell is kept when the enclosure of g excludes 0
+ * (g has one sign there) or that of g' does (g is strictly monotone); otherwise it is halved.
+ * Two neighbouring monotone cells share an end, so g' has the same sign on both: each maximal
+ * stretch of monotone cells between one-sign cells is a stretch where g is strictly monotone,
+ * which holds exactly one zero when g has opposite signs at its ends and none otherwise. The
+ * sign at an end of a stretch is the sign of the neighbouring one-sign cell, or the sign of g at
+ * the end of the search interval. So every zero on the closed search interval is counted
+ * exactly once; no sign is ever needed at an inner cell boundary, and a zero lying exactly on
+ * one costs nothing extra. Cell widths come from the local scale of the equation (the step
+ * length heuristic of {@link Continuation}: about 1/(1 + √|P0/P2| + |P1/P2|), at most half the
+ * convergence radius), so an oscillatory zero far out costs a few cells.
+ *
+ * <p><b>Refinement.</b> With L a lower bound of |g'| on the stretch (from its cells), every
+ * rational c gives z ∈ c ± |g(c)|/L, or the side of z from the sign of g(c). Then interval
+ * Newton (Moore 1966): with c inside the bracket X and G' an enclosure of g' over X,
+ * z ∈ c − g(c)/G' (mean value theorem), so X ∩ (c − g(c)/G') still holds z and shrinks
+ * quadratically. g(c) and G' come from the Taylor series at a cell start of the stretch (a
+ * short step from the walk's own state, never a new walk from the normalization point). The
+ * iteration stops when every point of X rounds to the same entry and the other columns,
+ * enclosed over X, decide too (Ziv, METHODS §5); when X stops shrinking the precision is
+ * doubled, the state at that cell start being recomputed from the normalization point, up to
+ * the table's cap (then {@link TableEvaluator.UndecidedException}, naming the zero).
+ *
+ * <p><b>Exact zeros.</b> A ball of g with radius 0 and midpoint 0 proves a zero at that
+ * rational point: at the normalization point when the normalization value is exactly 0, and
+ * anywhere for a polynomial solution (exact arithmetic; the simplest rational in the bracket
+ * is tried). Such a row carries its exact x. A rational zero of a non-polynomial solution away
+ * from its normalization point can only be enclosed: it is decided when the enclosure rounds
+ * to one entry, and otherwise the build stops with exit 3 rather than guess.
  */
 final class ZeroFinder {
-    private static final Rational CELL = Rational.of(1, 16);
-    private static final int MAX_DEPTH = 16;
+    /** How often one cell may be halved before the precision is blamed (a heuristic choice). */
+    private static final int MAX_HALVINGS = 24;
 
-    private ZeroFinder() {
+    private final TableDef table;
+    private final Grid.ZeroSearch search;
+    private final FunctionDef f;
+    private final Equation reduced;
+    private final Poly poly;
+    private final Poly gPoly;
+    private final int order;
+    private final int direction;
+    private final String gName;
+    private int precBits;
+    private int maxPrecBits;
+    private int cells;
+    private int halvings;
+    private int exactZeros;
+    /** Set when the walk's state should be recomputed from the normalization point at the current precision. */
+    private boolean stale;
+    private BigDecimal maxRelative = BigDecimal.ZERO;
+    private final List<TableResult.Row> rows = new ArrayList<>();
+
+    /** A cell: g of one sign on it (sign = that of g), or g strictly monotone (sign = that of g', slope bounds |g'| below). */
+    private record Cell(Rational a, Rational b, LocalExpansion local, boolean monotone, int sign, BigDecimal slope) {
     }
 
-    /** A zero: exactly known, or bracketed by a &lt; b with g(a) g(b) &lt; 0 and g monotone on [a, b]. */
-    private record Bracket(Rational a, Rational b, Rational exact) {
+    private ZeroFinder(TableDef t, Grid.ZeroSearch z) {
+        this.table = t;
+        this.search = z;
+        this.f = t.function();
+        this.reduced = f.equation().reduced();
+        this.poly = FunctionEvaluator.polynomial(f).orElse(null);
+        this.order = z.ofDerivative() ? 1 : 0;
+        this.gPoly = poly == null ? null : z.ofDerivative() ? poly.derivative() : poly;
+        this.direction = z.to().compareTo(z.from());
+        this.gName = z.ofDerivative() ? "y'" : "y";
+        this.precBits = TableEvaluator.startBits(t.format());
+        this.maxPrecBits = precBits;
     }
 
-    /** Rigorous: the zeros met walking the search interval, each row correctly rounded (class comment). */
+    /**
+     * Rigorous: the zeros met walking from the search's {@code from} to its {@code to} (both
+     * ends included), the first {@code count} of them when a count is given, each row
+     * correctly rounded (class comment).
+     *
+     * @throws TableEvaluator.UndecidedException when the precision cap cannot isolate or decide a zero
+     * @throws TableEvaluator.OutOfRangeException when the search holds no zero, fewer than
+     *     {@code count}, or g vanishes identically; or an entry is out of a fixed-point range
+     */
     static TableResult find(TableDef t, Grid.ZeroSearch z) throws ExprException, TableEvaluator.UndecidedException,
             TableEvaluator.OutOfRangeException {
-        FunctionDef f = t.function();
-        int prec = TableEvaluator.startBits(t.format()) + 24;
-        List<Bracket> zeros = isolate(f, z, prec, t);
-        List<TableResult.Row> rows = new ArrayList<>();
-        BigDecimal maxRel = BigDecimal.ZERO;
-        int maxPrec = 0;
-        for (Bracket br : zeros) {
-            Refined r = refine(f, z, br, t, prec);
-            rows.add(new TableResult.Row(br.exact(), r.entries()));
-            maxRel = maxRel.max(r.maxRelative());
-            maxPrec = Math.max(maxPrec, r.precBits());
-        }
-        return new TableResult(t, rows, maxRel, maxPrec);
+        return new ZeroFinder(t, z).walk();
     }
 
-    private static Ball g(Jet jet, boolean ofDerivative) {
-        return ofDerivative ? jet.derivative() : jet.value();
-    }
-
-    /** Enclosures of g and g' over the whole cell with center m and half-width r. */
-    private static Ball[] cellRange(FunctionDef f, Rational m, Jet atM, Rational r, boolean ofDerivative, int prec) {
-        Equation eq = f.equation().reduced();
-        Ball cell = Ball.of(BigDecimal.ZERO, Rational.of(r.numerator(), r.denominator()).toBigDecimal(new java.math.MathContext(20, java.math.RoundingMode.CEILING)));
-        Jet range = LocalSeries.sum(new Recurrence(eq, m), atM.value(), atM.derivative(), cell, 4 * prec + 2000, prec).jet();
-        if (!ofDerivative) {
-            return new Ball[] {range.value(), range.derivative()};
+    private TableResult walk() throws ExprException, TableEvaluator.UndecidedException, TableEvaluator.OutOfRangeException {
+        Rational from = search.from();
+        Rational to = search.to();
+        if (gPoly != null && gPoly.isZero()) {
+            throw new TableEvaluator.OutOfRangeException("table " + table.name() + ": " + gName + " of " + f.name()
+                    + " vanishes identically, so every point is a zero; a zeros table needs isolated zeros");
         }
-        Ball x = cell.add(Ball.of(m, prec), prec);
-        Ball p2 = eq.p2().evaluate(x, prec);
-        if (p2.containsZero()) {
-            return new Ball[] {range.derivative(), Ball.of(BigDecimal.ZERO, BigDecimal.valueOf(Long.MAX_VALUE))};
+        if (poly == null) {
+            Continuation.checkPath(reduced, f.equation(), from, to);
         }
-        Ball second = eq.p1().evaluate(x, prec).multiply(range.derivative(), prec)
-                .add(eq.p0().evaluate(x, prec).multiply(range.value(), prec), prec).divide(p2, prec).negate();
-        return new Ball[] {range.derivative(), second};
-    }
-
-    private static List<Bracket> isolate(FunctionDef f, Grid.ZeroSearch z, int prec, TableDef t)
-            throws ExprException, TableEvaluator.UndecidedException {
-        Equation eq = f.equation();
-        int dir = z.to().compareTo(z.from());
-        List<Bracket> found = new ArrayList<>();
-        Rational a = z.from();
-        Jet ja = FunctionEvaluator.enclose(f, a, prec).jet();
-        if (isExactZero(g(ja, z.ofDerivative()))) {
-            found.add(new Bracket(a, a, a));
+        LocalExpansion here = start(from);
+        int signBefore = endSign(here, "start");
+        if (signBefore == 0) {
+            addExact(from);
         }
-        while (!a.equals(z.to()) && (z.count() == 0 || found.size() < z.count())) {
-            Rational step = CELL.multiply(Rational.of(dir));
-            Rational b = (z.to().subtract(a)).abs().compareTo(CELL) <= 0 ? z.to() : a.add(step);
-            if (strictlyBetween(f.at(), a, b)) {
-                // the normalization point is a cell boundary: its values are known exactly there
-                b = f.at();
+        List<Cell> stretch = new ArrayList<>();
+        Rational a = from;
+        Rational reached = from;
+        boolean fresh = true;
+        while (!a.equals(to) && !done()) {
+            if (stale) {
+                // a refinement found the walk's state too wide here, or raised the precision
+                here = start(a);
+                fresh = true;
+                stale = false;
             }
-            Jet jb = b.equals(f.at()) ? FunctionEvaluator.enclose(f, b, prec).jet() : Continuation.evaluate(eq, a, ja, b, prec).jet();
-            List<Bracket> inCell = new ArrayList<>();
+            Rational b = next(a, here);
+            List<Cell> pieces = new ArrayList<>();
             try {
-                cell(f, z, a, ja, b, jb, 0, prec, inCell, t);
+                classify(here, a, b, 0, pieces);
             } catch (NeedsPrecision e) {
-                // the enclosures are too wide to decide this cell: start again from the
-                // normalization point at twice the precision (radii grow along a long walk)
-                if (2 * prec > t.capBits()) {
-                    throw new TableEvaluator.UndecidedException("table " + t.name() + ": the precision cap of " + t.capBits()
-                            + " bits cannot isolate the zeros near x = " + e.near.toDecimalOrFraction()
-                            + ": a multiple zero, or zeros closer than the enclosures can separate (raise precision_cap_bits)");
+                if (fresh) {
+                    precBits = higher(precBits, "isolate the zeros of " + gName + " near x = " + e.near.toDecimalOrFraction()
+                            + ": a multiple zero, or zeros closer than the enclosures can separate");
                 }
-                prec *= 2;
-                ja = FunctionEvaluator.enclose(f, a, prec).jet();
+                // first the state anew from the normalization point (a long walk widens it), then more precision
+                here = start(a);
+                fresh = true;
                 continue;
             }
-            found.addAll(inCell);
-            a = b;
-            ja = jb;
-        }
-        return z.count() > 0 && found.size() > z.count() ? found.subList(0, z.count()) : found;
-    }
-
-    private static boolean strictlyBetween(Rational x, Rational a, Rational b) {
-        return x.compareTo(a.min(b)) > 0 && x.compareTo(a.max(b)) < 0;
-    }
-
-    private static boolean isExactZero(Ball b) {
-        return b.isExact() && b.mid().signum() == 0;
-    }
-
-    /** Appends, in walking order, the zeros in the half-open cell (a, b] (a's own zero was recorded before). */
-    private static void cell(FunctionDef f, Grid.ZeroSearch z, Rational a, Jet ja, Rational b, Jet jb, int depth, int prec,
-            List<Bracket> found, TableDef t) {
-        Ball ga = g(ja, z.ofDerivative());
-        Ball gb = g(jb, z.ofDerivative());
-        Rational m = a.add(b).divide(Rational.TWO);
-        Jet jm = Continuation.evaluate(f.equation(), a, ja, m, prec).jet();
-        Ball[] range = cellRange(f, m, jm, b.subtract(a).abs().divide(Rational.TWO), z.ofDerivative(), prec);
-        if (!range[0].containsZero()) {
-            return;
-        }
-        boolean endsDecided = (!ga.containsZero() || isExactZero(ga)) && (!gb.containsZero() || isExactZero(gb));
-        if (!range[1].containsZero() && endsDecided) {
-            if (isExactZero(gb)) {
-                found.add(new Bracket(b, b, b));
-            } else if (!isExactZero(ga) && ga.mid().signum() != gb.mid().signum()) {
-                found.add(a.compareTo(b) < 0 ? new Bracket(a, b, null) : new Bracket(b, a, null));
+            for (Cell c : pieces) {
+                cells++;
+                if (c.monotone()) {
+                    stretch.add(c);
+                } else {
+                    if (!stretch.isEmpty()) {
+                        close(stretch, signBefore, c.sign());
+                        stretch = new ArrayList<>();
+                    }
+                    signBefore = c.sign();
+                }
+                reached = c.b();
+                if (done()) {
+                    break;
+                }
             }
-            return;
+            Cell last = pieces.get(pieces.size() - 1);
+            fresh = b.equals(f.at());
+            here = fresh ? start(b) : last.local().shift(b.subtract(last.local().center()));
+            a = b;
         }
-        if (depth >= MAX_DEPTH) {
-            throw new NeedsPrecision(m);
+        if (!done() && !stretch.isEmpty()) {
+            close(stretch, signBefore, endSign(here, "end"));
         }
-        cell(f, z, a, ja, m, jm, depth + 1, prec, found, t);
-        cell(f, z, m, jm, b, jb, depth + 1, prec, found, t);
+        String where = "[" + from.min(to).toDecimalOrFraction() + ", " + from.max(to).toDecimalOrFraction() + "]";
+        if (rows.isEmpty()) {
+            throw new TableEvaluator.OutOfRangeException("table " + table.name() + ": " + gName + " has no zero on " + where
+                    + " (proven: " + cells + " cells, each with " + gName + " of one sign or strictly monotone); widen 'search'");
+        }
+        if (search.count() > rows.size()) {
+            throw new TableEvaluator.OutOfRangeException("table " + table.name() + ": " + gName + " has only " + rows.size()
+                    + " zero(s) on " + where + " but count = " + search.count() + "; widen 'search' or lower 'count'");
+        }
+        return new TableResult(table, rows, maxRelative, maxPrecBits, proof(where, reached));
     }
 
-    /** A cell that cannot be decided at this precision (halving it further does not help). */
+    private boolean done() {
+        return search.count() > 0 && rows.size() >= search.count();
+    }
+
+    private String proof(String where, Rational stop) {
+        String found = !stop.equals(search.to())
+                ? rows.size() + " found walking from " + search.from().toDecimalOrFraction() + " toward " + search.to().toDecimalOrFraction()
+                        + ", the walk stopping at x = " + stop.toDecimalOrFraction() + " after the " + rows.size() + " asked"
+                : rows.size() + " found on " + where + ", walking from " + search.from().toDecimalOrFraction();
+        String dg = order == 0 ? "y'" : "y''";
+        return "zeros: " + found + (exactZeros > 0 ? " (" + exactZeros + " exact, by exact evaluation)" : "")
+                + "; isolation: " + cells + " cells (" + halvings + " halvings), on each a Taylor enclosure over the whole cell proves "
+                + gName + " of one sign or " + dg + " of one sign, so each stretch of cells with " + dg
+                + " of one sign holds one zero exactly when " + gName + " has opposite signs at its ends, none otherwise"
+                + "; refinement: interval Newton (Moore 1966) until every point of the enclosure rounds to the entry";
+    }
+
+    // ---- isolation ------------------------------------------------------------------------
+
+    /** The expansion at x from the normalization point (exact there; exact everywhere for polynomials). */
+    private LocalExpansion start(Rational x) throws ExprException {
+        return expansionAt(x, precBits);
+    }
+
+    /**
+     * The expansion at x at the given precision: the normalization state, carried to x by
+     * series steps of the local cell width ({@link LocalExpansion#shift}, whose error bound does
+     * not suffer the wrapping effect); exact for polynomials.
+     */
+    private LocalExpansion expansionAt(Rational x, int bits) throws ExprException {
+        if (poly != null) {
+            return LocalExpansion.polynomial(poly, x, bits);
+        }
+        Continuation.checkPath(reduced, f.equation(), f.at(), x);
+        LocalExpansion e = LocalExpansion.series(reduced, f.at(), FunctionEvaluator.enclose(f, f.at(), bits).jet(), bits);
+        Rational h = powerOfTwoBelow(e.cellWidthEstimate());
+        while (!e.center().equals(x)) {
+            Rational remaining = x.subtract(e.center());
+            Rational step = remaining.abs().compareTo(h) <= 0 ? remaining : remaining.signum() > 0 ? h : h.negate();
+            try {
+                e = e.shift(step);
+                h = powerOfTwoBelow(e.cellWidthEstimate());
+            } catch (LocalSeries.StepTooLongException tooLong) {
+                h = h.divide(Rational.TWO);
+            }
+        }
+        return e;
+    }
+
+    /** The largest power of two not above {@code width} (a positive heuristic width). */
+    private static Rational powerOfTwoBelow(double width) {
+        int e = Math.getExponent(Math.max(Math.min(width, 0x1p60), Double.MIN_NORMAL));
+        return e >= 0 ? Rational.of(BigInteger.ONE.shiftLeft(e)) : Rational.of(BigInteger.ONE, BigInteger.ONE.shiftLeft(-e));
+    }
+
+    /**
+     * The sign of g at an end of the search interval, 0 for a proven exact zero; raises the
+     * precision (from the normalization point) while the enclosure contains 0 but is not exact.
+     */
+    private int endSign(LocalExpansion here, String which) throws ExprException, TableEvaluator.UndecidedException {
+        Ball g = g(here.at(Rational.ZERO));
+        int bits = here.precBits();
+        boolean fresh = false;
+        while (g.containsZero() && !isExactZero(g)) {
+            if (fresh) {
+                bits = higher(bits, "decide the sign of " + gName + " at the " + which + " of the search, x = "
+                        + here.center().toDecimalOrFraction() + ": it may vanish there (an exact zero is proven only for polynomials"
+                        + " and at the normalization point; move the " + which + " of 'search')");
+            }
+            fresh = true;
+            g = g(expansionAt(here.center(), bits).at(Rational.ZERO));
+        }
+        return isExactZero(g) ? 0 : g.mid().signum();
+    }
+
+    /** The end of the cell that starts at a: a power of two from the local scale, cut at the normalization point and the end. */
+    private Rational next(Rational a, LocalExpansion here) {
+        double target = poly != null
+                ? Math.abs(search.to().subtract(search.from()).doubleEstimate()) / (4.0 * (poly.degree() + 1))
+                : here.cellWidthEstimate();
+        Rational h = powerOfTwoBelow(target);
+        Rational remaining = search.to().subtract(a);
+        Rational b = remaining.abs().compareTo(h) <= 0 ? search.to() : a.add(direction > 0 ? h : h.negate());
+        Rational at = f.at();
+        if (poly == null && at.compareTo(a.min(b)) > 0 && at.compareTo(a.max(b)) < 0) {
+            b = at;
+        }
+        return b;
+    }
+
+    /** Appends, in walking order, the cells that [a, b] splits into; {@code local} is centered at a. */
+    private void classify(LocalExpansion local, Rational a, Rational b, int depth, List<Cell> out) {
+        LocalExpansion.Range r;
+        try {
+            r = local.over(local.steps(a, b));
+        } catch (LocalSeries.StepTooLongException e) {
+            r = null;
+        }
+        if (r != null) {
+            Ball g = r.order(order);
+            if (!g.containsZero()) {
+                out.add(new Cell(a, b, local, false, g.mid().signum(), null));
+                return;
+            }
+            Ball dg = r.order(order + 1);
+            if (dg != null && !dg.containsZero()) {
+                out.add(new Cell(a, b, local, true, dg.mid().signum(), dg.absLower()));
+                return;
+            }
+        }
+        LocalExpansion.Range here = local.over(Ball.ZERO);
+        Ball dgHere = here.order(order + 1);
+        if (depth >= MAX_HALVINGS || here.order(order).containsZero() && (dgHere == null || dgHere.containsZero())) {
+            // neither the cell nor its start can be decided: halving cannot help, precision can
+            throw new NeedsPrecision(a);
+        }
+        halvings++;
+        Rational m = a.add(b).divide(Rational.TWO);
+        classify(local, a, m, depth + 1, out);
+        classify(local.shift(m.subtract(a)), m, b, depth + 1, out);
+    }
+
+    /** A cell that this precision cannot decide. */
     private static final class NeedsPrecision extends RuntimeException {
         private static final long serialVersionUID = 1L;
         private final transient Rational near;
@@ -170,98 +323,300 @@ final class ZeroFinder {
         }
     }
 
-    private record Refined(List<Entry> entries, BigDecimal maxRelative, int precBits) {
+    /** Twice the precision, at most the cap; at the cap, the table cannot be decided. */
+    private int higher(int bits, String what) throws TableEvaluator.UndecidedException {
+        if (bits >= table.capBits()) {
+            throw new TableEvaluator.UndecidedException("table " + table.name() + ": the precision cap of " + table.capBits()
+                    + " bits cannot " + what + " (raise precision_cap_bits)");
+        }
+        int next = Math.min(table.capBits(), 2 * bits);
+        maxPrecBits = Math.max(maxPrecBits, next);
+        return next;
     }
 
-    private static Refined refine(FunctionDef f, Grid.ZeroSearch z, Bracket br, TableDef t, int startPrec)
-            throws ExprException, TableEvaluator.UndecidedException, TableEvaluator.OutOfRangeException {
-        Rational a = br.a();
-        Rational b = br.b();
-        int prec = startPrec;
-        Jet ja = FunctionEvaluator.enclose(f, a, prec).jet();
-        int sa = g(ja, z.ofDerivative()).mid().signum();
-        while (true) {
-            // the cheap exact test first: only once the bracket's ends round alike are the other columns enclosed
-            boolean xDecided = br.exact() != null || Rounding.round(a, t.format(), t.rounding(), t.outOfRange())
-                    .equals(Rounding.round(b, t.format(), t.rounding(), t.outOfRange()));
-            Optional<List<Entry>> done = xDecided ? decide(f, z, br.exact(), a, ja, b, t, prec) : Optional.empty();
-            if (done.isPresent()) {
-                return new Refined(done.get(), BigDecimal.ZERO, prec);
-            }
-            if (br.exact() != null) {
-                prec *= 2;
-                if (prec > t.capBits()) {
-                    throw undecided(t, a);
-                }
-                ja = FunctionEvaluator.enclose(f, a, prec).jet();
-                continue;
-            }
-            Rational m = a.add(b).divide(Rational.TWO);
-            Ball gm = g(Continuation.evaluate(f.equation(), a, ja, m, prec).jet(), z.ofDerivative());
-            while (gm.containsZero()) {
-                prec *= 2;
-                if (prec > t.capBits()) {
-                    throw undecided(t, m);
-                }
-                ja = FunctionEvaluator.enclose(f, a, prec).jet();
-                gm = g(Continuation.evaluate(f.equation(), a, ja, m, prec).jet(), z.ofDerivative());
-            }
-            if (gm.mid().signum() == sa) {
-                ja = Continuation.evaluate(f.equation(), a, ja, m, prec).jet();
-                a = m;
-            } else {
-                b = m;
-            }
+    // ---- one stretch where g is monotone ----------------------------------------------------
+
+    /** The zero of a finished stretch, if its end signs say there is one (0 marks an exact zero at an end of the search). */
+    private void close(List<Cell> stretch, int signStart, int signEnd) throws ExprException, TableEvaluator.UndecidedException,
+            TableEvaluator.OutOfRangeException {
+        if (signStart == 0 || done()) {
+            return;
+        }
+        if (signEnd == 0) {
+            addExact(stretch.get(stretch.size() - 1).b());
+        } else if (signStart != signEnd) {
+            refine(stretch, signStart);
         }
     }
 
-    private static TableEvaluator.UndecidedException undecided(TableDef t, Rational near) {
-        return new TableEvaluator.UndecidedException("table " + t.name() + ": the precision cap of " + t.capBits()
-                + " bits cannot decide the zero near x = " + near.toDecimalOrFraction() + " (raise precision_cap_bits)");
+    private void refine(List<Cell> stretch, int signStart) throws ExprException, TableEvaluator.UndecidedException,
+            TableEvaluator.OutOfRangeException {
+        Rational first = stretch.get(0).a();
+        Rational last = stretch.get(stretch.size() - 1).b();
+        Bracket x = new Bracket(first.min(last), first.max(last), direction > 0 ? signStart : -signStart, slopeBound(stretch));
+        for (int i = 1; i < stretch.size(); i++) {
+            Cell c = stretch.get(i);
+            Ball gc = g(c.local().at(Rational.ZERO));
+            if (isExactZero(gc)) {
+                addExact(c.a());
+                return;
+            }
+            x.narrow(c.a(), gc);
+        }
+        Rational mid = x.lo.add(x.hi).divide(Rational.TWO);
+        LocalExpansion local = stretch.get(0).local();
+        for (Cell c : stretch) {
+            if (mid.compareTo(c.a().min(c.b())) >= 0 && mid.compareTo(c.a().max(c.b())) <= 0) {
+                local = c.local();
+            }
+        }
+        newton(x, local);
     }
 
-    /** The row's entries when every point of [a, b] gives the same entries, else empty. */
-    private static Optional<List<Entry>> decide(FunctionDef f, Grid.ZeroSearch z, Rational exact, Rational a, Jet ja,
-            Rational b, TableDef t, int prec) throws TableEvaluator.OutOfRangeException {
-        Ball xBall = exact != null ? Ball.of(exact, prec) : Ball.fromEndpoints(a.toBigDecimal(new java.math.MathContext(60)), b.toBigDecimal(new java.math.MathContext(60)));
-        Jet over;
-        if (exact != null) {
-            over = ja;
-        } else {
-            Rational half = b.subtract(a).divide(Rational.TWO);
-            Rational m = a.add(half);
-            Jet jm = Continuation.evaluate(f.equation(), a, ja, m, prec).jet();
-            Ball cell = Ball.of(BigDecimal.ZERO, half.toBigDecimal(new java.math.MathContext(20, java.math.RoundingMode.CEILING)));
-            over = LocalSeries.sum(new Recurrence(f.equation().reduced(), m), jm.value(), jm.derivative(), cell, 4 * prec + 2000, prec).jet();
+    /** The smallest of the cells' lower bounds of |g'|, all positive. */
+    private static BigDecimal slopeBound(List<Cell> stretch) {
+        BigDecimal s = stretch.get(0).slope();
+        for (Cell c : stretch) {
+            s = s.min(c.slope());
         }
-        List<Entry> entries = new ArrayList<>();
-        for (Column c : t.columns()) {
-            Optional<Entry> e;
-            if (c.isPoint()) {
-                if (exact != null) {
-                    e = Optional.of(Rounding.round(exact, t.format(), t.rounding(), t.outOfRange()));
+        return s;
+    }
+
+    /** [lo, hi] holding the only zero z of g there, g of sign {@code below} left of z, |g'| &gt;= slope on it. */
+    private static final class Bracket {
+        Rational lo;
+        Rational hi;
+        final int below;
+        final BigDecimal slope;
+
+        Bracket(Rational lo, Rational hi, int below, BigDecimal slope) {
+            this.lo = lo;
+            this.hi = hi;
+            this.below = below;
+            this.slope = slope;
+        }
+
+        /** Uses g(c) ∋ gc: its sign tells the side of z; else |c − z| &lt;= |g(c)| / slope (mean value theorem). */
+        void narrow(Rational c, Ball gc) {
+            if (!gc.containsZero()) {
+                if (gc.mid().signum() == below) {
+                    lo = lo.max(c);
                 } else {
-                    Entry lo = Rounding.round(a, t.format(), t.rounding(), t.outOfRange());
-                    Entry hi = Rounding.round(b, t.format(), t.rounding(), t.outOfRange());
-                    e = lo.equals(hi) ? Optional.of(lo) : Optional.empty();
+                    hi = hi.min(c);
                 }
+                return;
+            }
+            Rational r = Rational.of(Directed.divUp(gc.absUpper(), slope));
+            lo = lo.max(c.subtract(r));
+            hi = hi.min(c.add(r));
+        }
+
+        /** Intersects with the ball n. */
+        void intersect(Ball n) {
+            lo = lo.max(Rational.of(n.lower()));
+            hi = hi.min(Rational.of(n.upper()));
+        }
+
+        Rational width() {
+            return hi.subtract(lo);
+        }
+    }
+
+    /** Interval Newton steps on x with the series at {@code local}, raising the precision when x stops shrinking. */
+    private void newton(Bracket x, LocalExpansion local) throws ExprException, TableEvaluator.UndecidedException,
+            TableEvaluator.OutOfRangeException {
+        LocalExpansion loc = local;
+        boolean fresh = false;
+        while (true) {
+            Rational width = x.width();
+            LocalExpansion.Range over = overOrNull(loc, x.lo, x.hi);
+            Entry lo = round(x.lo);
+            if (over != null && lo.equals(round(x.hi))) {
+                Optional<List<Entry>> entries = otherColumns(lo, over, x.lo);
+                if (entries.isPresent()) {
+                    maxRelative = maxRelative.max(relative(x)).max(relativeOfColumns(over));
+                    rows.add(new TableResult.Row(x.lo.equals(x.hi) ? x.lo : null, entries.get()));
+                    return;
+                }
+            }
+            if (gPoly != null) {
+                Rational q = simplest(x.lo, x.hi);
+                if (q.denominator().bitLength() <= 256 && gPoly.evaluate(q).isZero()) {
+                    addExact(q);
+                    return;
+                }
+            }
+            Rational c = inside(x.lo, x.hi);
+            Ball gc = g(loc.at(c.subtract(loc.center())));
+            if (isExactZero(gc)) {
+                addExact(c);
+                return;
+            }
+            x.narrow(c, gc);
+            Ball dg = over == null ? null : over.order(order + 1);
+            if (dg != null && !dg.containsZero()) {
+                int p = loc.precBits();
+                x.intersect(Ball.of(c, p + 20).subtract(gc.divide(dg, p), p));
+            }
+            if (x.lo.compareTo(x.hi) > 0) {
+                throw new IllegalStateException("interval Newton lost the zero of " + gName + " near x = " + c.toDecimalOrFraction());
+            }
+            if (x.width().multiply(4).compareTo(width.multiply(3)) > 0) {
+                // x stopped shrinking: first the state anew from the normalization point, then more precision (Ziv)
+                int bits = fresh ? higher(loc.precBits(), "decide the zero of " + gName + " near x = " + approx(x)) : loc.precBits();
+                loc = expansionAt(loc.center(), bits);
+                fresh = true;
+                stale = true;
+                precBits = Math.max(precBits, bits);
+            }
+        }
+    }
+
+    private static LocalExpansion.Range overOrNull(LocalExpansion loc, Rational lo, Rational hi) {
+        try {
+            return loc.over(loc.steps(lo, hi));
+        } catch (LocalSeries.StepTooLongException e) {
+            return null;
+        }
+    }
+
+    /** The entries of the row whose x entry is {@code xEntry}, with the other columns enclosed in {@code over}; empty if one is undecided. */
+    private Optional<List<Entry>> otherColumns(Entry xEntry, LocalExpansion.Range over, Rational near)
+            throws TableEvaluator.OutOfRangeException {
+        List<Entry> entries = new ArrayList<>();
+        for (Column col : table.columns()) {
+            Entry e;
+            if (col.isPoint()) {
+                e = xEntry;
+            } else if (col.order() == order) {
+                e = round(Rational.ZERO);
             } else {
-                Ball v = c.order() == 0 ? over.value() : over.derivative();
-                if (c.order() == (z.ofDerivative() ? 1 : 0)) {
-                    // the searched quantity is zero at the zero itself
-                    v = Ball.ZERO;
+                Optional<Entry> d = Rounding.decide(over.order(col.order()), table.format(), table.rounding(), table.outOfRange());
+                if (d.isEmpty()) {
+                    return Optional.empty();
                 }
-                e = Rounding.decide(v, t.format(), t.rounding(), t.outOfRange());
+                e = d.get();
             }
-            if (e.isEmpty()) {
-                return Optional.empty();
-            }
-            if (e.get().kind() == Entry.Kind.OUT_OF_RANGE) {
-                throw new TableEvaluator.OutOfRangeException("table " + t.name() + ": the " + c.name() + " at the zero near x = "
-                        + a.toDecimalOrFraction() + " lies outside the range of " + t.format().name());
-            }
-            entries.add(e.get());
+            entries.add(checked(col, e, near));
         }
         return Optional.of(entries);
+    }
+
+    /** Records the zero at the rational q, proven exact; the other columns by the precision loop of {@link FunctionEvaluator#entry}. */
+    private void addExact(Rational q) throws ExprException, TableEvaluator.UndecidedException,
+            TableEvaluator.OutOfRangeException {
+        List<Entry> entries = new ArrayList<>();
+        for (Column col : table.columns()) {
+            Entry e;
+            if (col.isPoint()) {
+                e = round(q);
+            } else if (col.order() == order) {
+                e = round(Rational.ZERO);
+            } else {
+                try {
+                    FunctionEvaluator.Decided d = FunctionEvaluator.entry(f, q, col.order() == 1, table.format(), table.rounding(),
+                            table.outOfRange(), table.capBits());
+                    maxPrecBits = Math.max(maxPrecBits, d.precBits());
+                    e = d.entry();
+                } catch (PrecisionCapException ex) {
+                    throw new TableEvaluator.UndecidedException("table " + table.name() + ": the precision cap of " + table.capBits()
+                            + " bits cannot decide the " + col.name() + " at the zero x = " + q.toDecimalOrFraction()
+                            + " (raise precision_cap_bits)");
+                }
+            }
+            entries.add(checked(col, e, q));
+        }
+        exactZeros++;
+        rows.add(new TableResult.Row(q, entries));
+    }
+
+    private Entry checked(Column col, Entry e, Rational near) throws TableEvaluator.OutOfRangeException {
+        if (e.kind() == Entry.Kind.OUT_OF_RANGE) {
+            throw new TableEvaluator.OutOfRangeException("table " + table.name() + ": the " + col.name() + " at the zero near x = "
+                    + approxOf(near) + " lies outside the range of " + table.format().name()
+                    + " (out_of_range = \"error\"; choose a wider format or out_of_range = \"saturate\")");
+        }
+        return e;
+    }
+
+    // ---- small helpers ----------------------------------------------------------------------
+
+    private Ball g(Jet j) {
+        return order == 0 ? j.value() : j.derivative();
+    }
+
+    private Entry round(Rational v) {
+        return Rounding.round(v, table.format(), table.rounding(), table.outOfRange());
+    }
+
+    private static boolean isExactZero(Ball b) {
+        return b.isExact() && b.mid().signum() == 0;
+    }
+
+    /** A short decimal inside [lo, hi] within a sixteenth of the width from the midpoint (the midpoint itself when none is found). */
+    static Rational inside(Rational lo, Rational hi) {
+        Rational mid = lo.add(hi).divide(Rational.TWO);
+        Rational w = hi.subtract(lo);
+        if (w.isZero() || mid.isZero()) {
+            return mid;
+        }
+        BigDecimal wd = w.toBigDecimal(MathContext.DECIMAL32);
+        BigDecimal md = mid.toBigDecimal(MathContext.DECIMAL32);
+        int digits = Math.max(1, (md.precision() - md.scale()) - (wd.precision() - wd.scale()) + 3);
+        Rational c = Rational.of(mid.toBigDecimal(new MathContext(digits)));
+        return c.subtract(mid).abs().multiply(16).compareTo(w) <= 0 ? c : mid;
+    }
+
+    /**
+     * Exact: the rational of smallest denominator in [lo, hi] (the smallest in absolute value
+     * among those), by continued fractions: an integer in the interval if there is one, else
+     * floor(lo) + 1 / (the simplest in [1/(hi − floor lo), 1/(lo − floor lo)]).
+     */
+    static Rational simplest(Rational lo, Rational hi) {
+        if (lo.signum() <= 0 && hi.signum() >= 0) {
+            return Rational.ZERO;
+        }
+        if (hi.signum() < 0) {
+            return simplest(hi.negate(), lo.negate()).negate();
+        }
+        Rational floor = Rational.of(lo.floor());
+        if (floor.equals(lo)) {
+            return lo;
+        }
+        Rational up = floor.add(Rational.ONE);
+        if (up.compareTo(hi) <= 0) {
+            return up;
+        }
+        return floor.add(simplest(hi.subtract(floor).reciprocal(), lo.subtract(floor).reciprocal()).reciprocal());
+    }
+
+    private static String approx(Bracket x) {
+        return approxOf(x.lo.add(x.hi).divide(Rational.TWO));
+    }
+
+    private static String approxOf(Rational v) {
+        BigDecimal d = v.toBigDecimalExact();
+        return d != null && d.precision() <= 20 ? v.toDecimalOrFraction() : v.toBigDecimal(new MathContext(17)).toPlainString();
+    }
+
+    /** The half-width of x relative to its smallest |point| (the width when x contains 0). */
+    private static BigDecimal relative(Bracket x) {
+        BigDecimal half = Directed.absUp(x.width().divide(Rational.TWO));
+        if (x.lo.signum() <= 0 && x.hi.signum() >= 0) {
+            return half;
+        }
+        return Directed.divUp(half, Directed.absDown(x.lo.abs().min(x.hi.abs())));
+    }
+
+    private BigDecimal relativeOfColumns(LocalExpansion.Range over) {
+        BigDecimal r = BigDecimal.ZERO;
+        for (Column col : table.columns()) {
+            if (!col.isPoint() && col.order() != order) {
+                Ball b = over.order(col.order());
+                BigDecimal low = b.absLower();
+                r = r.max(low.signum() > 0 ? Directed.divUp(b.rad(), low) : b.rad());
+            }
+        }
+        return r;
     }
 }
