@@ -54,6 +54,14 @@ final class BuildCommand implements Callable<Integer> {
     private record Job(SpecFile spec, TableDef table) {
     }
 
+    /** The table being awaited when evaluation failed (its error is located at its spec entry). */
+    private Job failed;
+
+    /** {@code file:line:column: } of the failed table's definition, or nothing. */
+    private String failedAt() {
+        return failed == null ? "" : failed.spec().tablePosition(failed.table().name()) + ": ";
+    }
+
     @Override
     public Integer call() {
         PrintWriter outw = spec.commandLine().getOut();
@@ -104,14 +112,17 @@ final class BuildCommand implements Callable<Integer> {
         } catch (Outputs.TemplateError e) {
             err.println("odetab: " + e.where() + ": " + e.getMessage());
             return Main.BAD_INPUT;
-        } catch (Outputs.ClashError | TableEvaluator.OutOfRangeException | SingularCrossingException e) {
+        } catch (Outputs.ClashError e) {
             err.println("odetab: " + e.getMessage());
+            return Main.BAD_INPUT;
+        } catch (TableEvaluator.OutOfRangeException | SingularCrossingException e) {
+            err.println("odetab: " + failedAt() + e.getMessage());
             return Main.BAD_INPUT;
         } catch (ExprException e) {
-            err.println("odetab: a normalization constant cannot be evaluated: " + e.getMessage());
+            err.println("odetab: " + failedAt() + "a normalization constant cannot be evaluated: " + e.getMessage());
             return Main.BAD_INPUT;
         } catch (TableEvaluator.UndecidedException e) {
-            err.println("odetab: " + e.getMessage());
+            err.println("odetab: " + failedAt() + e.getMessage());
             return Main.NUMERICAL_LIMIT;
         } catch (IOException e) {
             err.println("odetab: cannot write the outputs: " + e.getMessage());
@@ -147,12 +158,14 @@ final class BuildCommand implements Callable<Integer> {
             for (Job j : work) {
                 futures.add(pool.submit(() -> TableEvaluator.evaluate(j.table(), progress, chunkPool)));
             }
-            for (Future<TableResult> f : futures) {
-                TableResult r = get(f);
+            for (int i = 0; i < futures.size(); i++) {
+                failed = work.get(i);
+                TableResult r = get(futures.get(i));
                 results.add(r);
                 lines.add("odetab: table " + r.table().name() + ": " + r.rows().size() + " rows, working precision up to "
                         + r.maxPrecBits() + " bits");
             }
+            failed = null;
         } finally {
             pool.shutdownNow();
             if (chunkPool != null) {

@@ -256,6 +256,15 @@ public final class SpecFile {
         return r;
     }
 
+    /**
+     * Where a table is defined: {@code file:line:column} of its {@code [tables.NAME]} key (the
+     * file alone when the position is unknown), for errors found while evaluating it.
+     */
+    public String tablePosition(String table) {
+        TomlPosition p = toml.inputPositionOf(List.of("tables", table));
+        return p == null ? display : display + ":" + p.line() + ":" + p.column();
+    }
+
     /** An error located at a key (the key's own position). */
     InputError error(List<String> key, String message) {
         TomlPosition p = toml.inputPositionOf(key);

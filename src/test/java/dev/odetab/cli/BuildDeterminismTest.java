@@ -92,13 +92,13 @@ class BuildDeterminismTest {
         // the first table of each failing spec has other points, so writing it would change every file
         CliRunner.Result range = CliRunner.run("build", DIR + "atomic-out-of-range.toml", "--out", out.toString());
         assertEquals(2, range.code(), range.err());
-        assertEquals("odetab: table second: the value at x = 0 lies outside the range of fixed:s16.15 "
+        assertEquals("odetab: " + DIR + "atomic-out-of-range.toml:20:1: table second: the value at x = 0 lies outside the range of fixed:s16.15 "
                 + "(out_of_range = \"error\"; choose a wider format or out_of_range = \"saturate\")\n", range.err());
         assertSameFiles(before, snapshot(out), "after a build failing on an out-of-range entry");
 
         CliRunner.Result undecided = CliRunner.run("build", DIR + "atomic-undecided.toml", "--out", out.toString());
         assertEquals(3, undecided.code(), undecided.err());
-        assertEquals("odetab: table second: the precision cap of 128 bits cannot decide the rounding of 1 row(s), at x = 0 "
+        assertEquals("odetab: " + DIR + "atomic-undecided.toml:21:1: table second: the precision cap of 128 bits cannot decide the rounding of 1 row(s), at x = 0 "
                 + "(raise precision_cap_bits, or the value may be an exact rounding boundary)\n", undecided.err());
         assertSameFiles(before, snapshot(out), "after a build failing at the precision cap");
 
