@@ -31,7 +31,7 @@ import org.apfloat.ApfloatMath;
  * run, for apfloat 1.15.0 on points of the same grid (apfloat takes milliseconds per point, so
  * it runs on an evenly spaced sample; its figure is time per entry on that sample). Run with
  * {@code mvn -B -Pbench -DskipTests verify} (DEVELOPERS.md). Not a test: it asserts nothing and
- * prints a table. {@code -Dbench.workloads=W1,W4} picks workloads.
+ * prints a table. {@code -Dbench.workloads=W1,W4} picks workloads (default all four).
  *
  * <p>odetab's figures: W1–W3 in this JVM after one warm-up run on a smaller grid, first on one
  * thread (CPU time of the thread and wall time, the better of two runs), then on all cores
@@ -47,7 +47,7 @@ public final class Workloads {
 
     public static void main(String[] args) throws Exception {
         Path jar = Path.of(args.length > 0 ? args[0] : "target/odetab.jar");
-        List<String> which = List.of(System.getProperty("bench.workloads", "W1,W2,W4").split(","));
+        List<String> which = List.of(System.getProperty("bench.workloads", "W1,W2,W3,W4").split(","));
         System.out.printf(Locale.ROOT, "odetab benchmark: %d cores, Java %s%n", Runtime.getRuntime().availableProcessors(),
                 System.getProperty("java.version"));
         System.out.printf(Locale.ROOT, "%-4s %-34s %9s %12s %12s %12s %14s %9s%n", "", "workload", "entries", "cpu us/e 1t",
@@ -57,6 +57,9 @@ public final class Workloads {
         }
         if (which.contains("W2")) {
             w2();
+        }
+        if (which.contains("W3")) {
+            w3();
         }
         if (which.contains("W4")) {
             w4(jar);
@@ -157,6 +160,49 @@ public final class Workloads {
         }
         double apfloat = (System.nanoTime() - a0) / 1e3 / sample;
         row("W2", "P_20 on [-1, 1] step 1/1000", o, apfloat, sample);
+    }
+
+    /**
+     * W3: the Gauss–Legendre rule n = 100, nodes and weights, in binary64 and in decimal:40 (a
+     * spec read like any other). apfloat: Newton's method on P_100 (ApfloatMath.legendreP) at 45
+     * digits from binary64 seeds for a sample of nodes, and the weight 2/((1 − x²) P'(x)²) there.
+     */
+    private static void w3() throws Exception {
+        Path dir = Files.createTempDirectory("odetab-bench");
+        Path spec = dir.resolve("w3.toml");
+        Files.writeString(spec, String.join("\n",
+                "title = \"W3: Gauss-Legendre n = 100\"",
+                "[functions.p100]", "family = \"legendre-p\"", "n = 100",
+                "[tables.gl100_binary64]", "kind = \"quadrature\"", "function = \"p100\"", "columns = [\"node\", \"weight\"]",
+                "format = \"binary64\"", "outputs = [\"csv\"]",
+                "[tables.gl100_decimal40]", "kind = \"quadrature\"", "function = \"p100\"", "columns = [\"node\", \"weight\"]",
+                "format = \"decimal:40\"", "outputs = [\"csv\"]", ""));
+        List<TableDef> tables = dev.odetab.spec.SpecFile.load(spec).tables();
+        // apfloat: a sample of 10 nodes, each from the binary64 node of odetab's own table as seed.
+        TableResult seeds = TableEvaluator.evaluate(tables.get(0));
+        for (TableDef t : tables) {
+            double[] o = odetab(t, t, 2);
+            int digits = t.format().name().equals("binary64") ? 20 : 45;
+            long a0 = System.nanoTime();
+            int sample = 0;
+            Apfloat n = new Apfloat(100, digits + 10);
+            Apfloat one = new Apfloat(1, digits + 10);
+            for (int i = 0; i < 100; i += 10) {
+                Apfloat x = new Apfloat(new java.math.BigDecimal(seeds.rows().get(i).entries().get(0).value().toBigDecimalExact()), digits + 10);
+                Apfloat derivative = one;
+                for (int it = 0; it < 3; it++) {
+                    Apfloat p = ApfloatMath.legendreP(n, x);
+                    Apfloat q = ApfloatMath.legendreP(n.subtract(one), x);
+                    // DLMF 18.9.20 (Legendre): (1 − x²) P_n'(x) = n (P_(n−1)(x) − x P_n(x))
+                    derivative = n.multiply(q.subtract(x.multiply(p))).divide(one.subtract(x.multiply(x)));
+                    x = x.subtract(p.divide(derivative));
+                }
+                new Apfloat(2, digits).divide(one.subtract(x.multiply(x)).multiply(derivative).multiply(derivative));
+                sample++;
+            }
+            double apfloat = (System.nanoTime() - a0) / 1e3 / (2.0 * sample);
+            row("W3", "Gauss-Legendre n = 100, " + t.format().name(), o, apfloat, sample);
+        }
     }
 
     /** W4: Ai at 10^6 points on [−8, 4], binary32, as a whole process with a 512 MiB heap. */
