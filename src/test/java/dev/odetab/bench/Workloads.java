@@ -188,7 +188,7 @@ public final class Workloads {
             Apfloat n = new Apfloat(100, digits + 10);
             Apfloat one = new Apfloat(1, digits + 10);
             for (int i = 0; i < 100; i += 10) {
-                Apfloat x = new Apfloat(new java.math.BigDecimal(seeds.rows().get(i).entries().get(0).value().toBigDecimalExact()), digits + 10);
+                Apfloat x = new Apfloat(seeds.rows().get(i).entries().get(0).value().toBigDecimalExact(), digits + 10);
                 Apfloat derivative = one;
                 for (int it = 0; it < 3; it++) {
                     Apfloat p = ApfloatMath.legendreP(n, x);
