@@ -173,22 +173,28 @@ public sealed interface Grid {
     }
 
     /**
+     * Not a grid: the points are found by the evaluation (zeros, nodes of a rule), so there are
+     * none before it, and they are irrational in general: the table holds each correctly rounded.
+     */
+    sealed interface Found extends Grid permits ZeroSearch {
+        @Override
+        default List<Rational> points() {
+            return List.of();
+        }
+
+        @Override
+        default boolean hasIrrationalPoints() {
+            return true;
+        }
+    }
+
+    /**
      * Not a grid but a search: the zeros of y (or of y' when {@code ofDerivative}) met walking
      * from {@code from} to {@code to}, at most {@code count} of them (0: all). The points are
      * found by {@link ZeroFinder}; they are irrational in general, so the table holds each zero
      * correctly rounded.
      */
-    record ZeroSearch(Rational from, Rational to, int count, boolean ofDerivative) implements Grid {
-        @Override
-        public List<Rational> points() {
-            return List.of();
-        }
-
-        @Override
-        public boolean hasIrrationalPoints() {
-            return true;
-        }
-
+    record ZeroSearch(Rational from, Rational to, int count, boolean ofDerivative) implements Found {
         @Override
         public String describe() {
             return "zeros of " + (ofDerivative ? "y'" : "y") + " met walking from " + from.toDecimalOrFraction() + " to "
