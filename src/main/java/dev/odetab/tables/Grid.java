@@ -176,7 +176,7 @@ public sealed interface Grid {
      * Not a grid: the points are found by the evaluation (zeros, nodes of a rule), so there are
      * none before it, and they are irrational in general: the table holds each correctly rounded.
      */
-    sealed interface Found extends Grid permits ZeroSearch {
+    sealed interface Found extends Grid permits ZeroSearch, Quadrature {
         @Override
         default List<Rational> points() {
             return List.of();
@@ -201,6 +201,23 @@ public sealed interface Grid {
                     + to.toDecimalOrFraction() + (count > 0 ? ", the first " + count : "")
                     + "; isolated on cells where a Taylor enclosure proves that " + (ofDerivative ? "y'" : "y")
                     + " keeps its sign or is strictly monotone, so every zero is counted exactly once";
+        }
+    }
+
+    /**
+     * Not a grid but a Gauss rule: its points are the n nodes of the rule, found by
+     * {@link GaussRule}.
+     *
+     * @param family the rule
+     * @param flushUnderflow true when a weight below the format's smallest normal number is
+     *     written as 0 and flagged (weight_underflow = "flush"); false when it is an error
+     */
+    record Quadrature(GaussFamily family, boolean flushUnderflow) implements Found {
+        @Override
+        public String describe() {
+            return family.describe() + "; nodes ascending, each zero of p_" + family.n()
+                    + " proven by interval Newton from an exact center, all " + family.n() + " counted by disjoint enclosures"
+                    + (flushUnderflow ? "; weights below the smallest normal number flushed to 0 and flagged in weight_flag" : "");
         }
     }
 

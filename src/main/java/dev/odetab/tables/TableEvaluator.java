@@ -55,7 +55,7 @@ public final class TableEvaluator {
 
     /**
      * Rigorous: every entry of the table, each the correct rounding of the exact value (see the
-     * class comment for how it is decided); zeros tables go to {@link ZeroFinder}.
+     * class comment for how it is decided); zeros tables go to {@link ZeroFinder}, quadrature tables to {@link GaussRule}.
      *
      * @throws UndecidedException when the table's precision cap cannot decide some entries (named)
      * @throws OutOfRangeException when a fixed-point entry is out of range and the policy is "error"
@@ -63,6 +63,9 @@ public final class TableEvaluator {
     public static TableResult evaluate(TableDef t) throws ExprException, UndecidedException, OutOfRangeException {
         if (t.grid() instanceof Grid.ZeroSearch z) {
             return ZeroFinder.find(t, z);
+        }
+        if (t.grid() instanceof Grid.Quadrature q) {
+            return GaussRule.table(t, q);
         }
         List<Rational> xs = t.grid().points();
         int n = xs.size();
