@@ -20,6 +20,7 @@ import java.util.List;
 import java.util.Map;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -256,14 +257,13 @@ class GaussRuleTest {
                 return GaussFamily.pochhammer(alpha.add(Rational.ONE), k);
             }
             default -> {
+                // term_j = C(k, j) 2^j (−1)^(k−j) (β+1)_j/(α+β+2)_j, each from the one before
                 Rational sum = Rational.ZERO;
-                Rational binom = Rational.ONE;
+                Rational term = Rational.of(k % 2 == 0 ? 1 : -1);
                 for (int j = 0; j <= k; j++) {
-                    Rational term = binom.multiply(Rational.TWO.pow(j)).multiply((k - j) % 2 == 0 ? 1 : -1)
-                            .multiply(GaussFamily.pochhammer(beta.add(Rational.ONE), j))
-                            .divide(GaussFamily.pochhammer(alpha.add(beta).add(Rational.TWO), j));
                     sum = sum.add(term);
-                    binom = binom.multiply(Rational.of(k - j, j + 1L));
+                    term = term.multiply(Rational.of(-2L * (k - j), j + 1L)).multiply(beta.add(Rational.of(j + 1L)))
+                            .divide(alpha.add(beta).add(Rational.of(j + 2L)));
                 }
                 return sum;
             }
@@ -324,6 +324,11 @@ class GaussRuleTest {
             w[i] = r.rows().get(i).entries().get(1).value().toBigDecimalExact();
             power[i] = BigDecimal.ONE;
         }
+        // the bound's factor to 60 digits, rounded away from the exact factor's side (up, and down in the divisor)
+        MathContext up = new MathContext(60, java.math.RoundingMode.UP);
+        MathContext down = new MathContext(60, java.math.RoundingMode.DOWN);
+        BigDecimal onePlusU = BigDecimal.ONE.add(u.toBigDecimalExact());
+        BigDecimal oneMinusU = BigDecimal.ONE.subtract(u.toBigDecimalExact());
         for (int k = 0; k <= 2 * n - 1; k++) {
             BigDecimal sum = BigDecimal.ZERO;
             BigDecimal absSum = BigDecimal.ZERO;
@@ -335,8 +340,8 @@ class GaussRuleTest {
             }
             // the sums carry 100 digits: each of the (k + 2) size roundings per term is below 10^-99
             // relative, so 10^-95 Σ ŵ|x̂|^k covers them (with k, size < 10^3)
-            Rational growth = Rational.ONE.add(u).pow(k + 1).subtract(Rational.ONE).divide(Rational.ONE.subtract(u).pow(k + 1));
-            BigDecimal tolerance = growth.toBigDecimal(mc).add(BigDecimal.ONE.scaleByPowerOfTen(-95)).multiply(absSum, mc);
+            BigDecimal growth = onePlusU.pow(k + 1, up).subtract(BigDecimal.ONE).divide(oneMinusU.pow(k + 1, down), up);
+            BigDecimal tolerance = growth.add(BigDecimal.ONE.scaleByPowerOfTen(-95)).multiply(absSum, mc);
             Rational ratio = momentRatio(kind, alpha, beta, k);
             BigDecimal moment = mu0.multiply(ratio.toBigDecimal(mc), mc);
             BigDecimal error = sum.subtract(moment).abs();
@@ -359,6 +364,26 @@ class GaussRuleTest {
         assertExact(GaussFamily.Kind.GEGENBAUER, 12, "-1/4", null, D40);
         assertExact(GaussFamily.Kind.JACOBI, 8, "1/2", "-1/3", B64);
         assertExact(GaussFamily.Kind.JACOBI, 13, "2", "5", D40);
+    }
+
+    @Test
+    @Tag("slow")
+    void fiveHundredPointRulesAreExactToRounding() throws Exception {
+        // issue 6: n up to at least 500 for Legendre and Hermite, binary64 and decimal:40. Gauss–Hermite
+        // n = 500 in binary64 has weights below 2^-1022 (nodes out to x ≈ 31, w ≈ e^(−x²)): its scaled
+        // weights are checked against the decimal:40 rule instead (A&S 25.4.46 with the factor e^(x²)).
+        assertExact(GaussFamily.Kind.LEGENDRE, 500, null, null, B64);
+        assertExact(GaussFamily.Kind.LEGENDRE, 500, null, null, D40);
+        assertExact(GaussFamily.Kind.HERMITE, 500, null, null, D40);
+        TableResult scaled = rule(GaussFamily.Kind.HERMITE, 500, null, null, B64, RoundingMode.NEAREST_EVEN, false, "node", "scaled_weight");
+        TableResult reference = rule(GaussFamily.Kind.HERMITE, 500, D40);
+        for (int i = 0; i < 500; i++) {
+            BigDecimal x40 = reference.rows().get(i).entries().get(0).value().toBigDecimalExact();
+            BigDecimal w40 = reference.rows().get(i).entries().get(1).value().toBigDecimalExact();
+            assertEquals(Double.doubleToRawLongBits(x40.doubleValue()), scaled.rows().get(i).entries().get(0).bits().longValue(), "node " + (i + 1));
+            Apfloat sw = new Apfloat(w40, DIGITS).multiply(ApfloatMath.exp(new Apfloat(x40, DIGITS).multiply(new Apfloat(x40, DIGITS))));
+            assertEquals(bits(sw), scaled.rows().get(i).entries().get(1).bits().longValue(), "scaled weight " + (i + 1));
+        }
     }
 
     @Test
