@@ -25,7 +25,7 @@ import org.tomlj.TomlTable;
 /** Reading and validating the {@code [tables.*]} part of a spec (DESIGN.md "Spec file"). */
 final class SpecTables {
     static final Set<String> TABLE_KEYS = new LinkedHashSet<>(List.of("function", "kind", "grid", "points", "columns",
-            "format", "rounding", "out_of_range", "precision_cap_bits", "outputs", "terms", "search", "count", "of"));
+            "format", "rounding", "out_of_range", "precision_cap_bits", "outputs", "terms", "search", "count", "of", "weight_underflow"));
     static final Set<String> GRID_KEYS = new LinkedHashSet<>(List.of("from", "to", "step"));
     static final Set<String> KINDS = new LinkedHashSet<>(List.of("values", "zeros", "quadrature", "taylor"));
     static final Set<String> BUILT_IN_OUTPUTS = new LinkedHashSet<>(List.of("csv", "c", "java"));
@@ -82,8 +82,8 @@ final class SpecTables {
             throw spec.error(child(base, "kind"), "unknown kind '" + kind + "'" + Suggestions.hint(kind, KINDS)
                     + " (kinds: " + String.join(", ", KINDS) + ")");
         }
-        if (kind.equals("quadrature")) {
-            throw spec.error(child(base, "kind"), "kind '" + kind + "' is not available in this version of odetab (available: values, taylor, zeros)");
+        if (!kind.equals("quadrature") && t.contains("weight_underflow")) {
+            throw spec.error(child(base, "weight_underflow"), "'weight_underflow' belongs to quadrature tables (kind = \"quadrature\")");
         }
         for (String zeroKey : List.of("search", "count", "of")) {
             if (!kind.equals("zeros") && t.contains(zeroKey)) {
@@ -108,8 +108,10 @@ final class SpecTables {
         }
         String fname = string(base, t, "function");
         FunctionDef f = function(child(base, "function"), fname);
-        Grid grid = kind.equals("zeros") ? zeroSearch(base, t) : grid(base, t);
-        List<Column> columns = kind.equals("zeros") && !t.contains("columns") ? List.of(Column.parse("x")) : columns(base, t, terms);
+        boolean quadrature = kind.equals("quadrature");
+        Grid grid = quadrature ? null : kind.equals("zeros") ? zeroSearch(base, t) : grid(base, t);
+        List<Column> columns = quadrature ? null
+                : kind.equals("zeros") && !t.contains("columns") ? List.of(Column.parse("x")) : columns(base, t, terms);
         Format format = Format.BinaryFormat.BINARY64;
         if (t.contains("format")) {
             String text = string(base, t, "format");
@@ -147,7 +149,11 @@ final class SpecTables {
             }
             cap = (int) (long) l;
         }
-        if (grid.hasIrrationalPoints()) {
+        if (quadrature) {
+            SpecQuadrature.Parsed rule = new SpecQuadrature(spec, root).table(base, t, fname, f, format);
+            grid = rule.grid();
+            columns = rule.columns();
+        } else if (grid.hasIrrationalPoints()) {
             for (Column c : columns) {
                 if (c.order() >= 2 || c.taylor()) {
                     throw spec.error(child(base, "columns"), "column '" + c.name()

@@ -4,7 +4,9 @@ package dev.odetab.tables;
  * A column of a table: the point {@code x}, the {@code value}, the {@code derivative}, a higher
  * derivative {@code derivativeK} (K = 2 … 9, from the Taylor coefficients at the point:
  * y^(K)(x) = K! c_K), or, in a {@code taylor} table, the Taylor coefficient {@code taylorK} = c_K
- * at the point (the spec's column {@code taylor} expands to taylor0 … taylor(terms−1)).
+ * at the point (the spec's column {@code taylor} expands to taylor0 … taylor(terms−1)); in a
+ * {@code quadrature} table, the {@code node} (a point column), its {@code weight}, the
+ * {@code scaled_weight} and the {@code weight_flag} of a flushed weight ({@link GaussRule}).
  *
  * @param name the name in the spec and in the outputs
  * @param order −1 for x, 0 for the value, K for the K-th derivative or coefficient
@@ -37,6 +39,15 @@ public record Column(String name, int order, boolean taylor) {
                 }
                 return null;
         }
+    }
+
+    /** A column of a quadrature table: node, weight, scaled_weight or weight_flag; null for any other name. */
+    public static Column quadrature(String name) {
+        return switch (name) {
+            case "node" -> new Column(name, -1);
+            case "weight", "scaled_weight", "weight_flag" -> new Column(name, 0);
+            default -> null;
+        };
     }
 
     public boolean isPoint() {

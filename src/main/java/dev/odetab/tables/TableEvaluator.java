@@ -62,8 +62,8 @@ public final class TableEvaluator {
 
     /**
      * Rigorous: every entry of the table, each the correct rounding of the exact value (see the
-     * class comment for how it is decided); zeros tables go to {@link ZeroFinder}. Evaluated in
-     * the calling thread.
+     * class comment for how it is decided); zeros tables go to {@link ZeroFinder}, quadrature
+     * tables to {@link GaussRule}. Evaluated in the calling thread.
      *
      * @throws UndecidedException when the table's precision cap cannot decide some entries (named)
      * @throws OutOfRangeException when a fixed-point entry is out of range and the policy is "error"
@@ -91,6 +91,12 @@ public final class TableEvaluator {
             progress.start(t.name(), zeros.rows().size());
             progress.advance(zeros.rows().size());
             return zeros;
+        }
+        if (t.grid() instanceof Grid.Quadrature q) {
+            TableResult rule = GaussRule.table(t, q);
+            progress.start(t.name(), rule.rows().size());
+            progress.advance(rule.rows().size());
+            return rule;
         }
         int n = t.grid().size();
         progress.start(t.name(), n);

@@ -26,6 +26,7 @@ import org.junit.jupiter.params.provider.MethodSource;
  */
 class MalformedSpecTest {
     private static final String DIR = "src/test/resources/specs/malformed/";
+    private static final String GAUSS_FAMILIES = "legendre-p, hermite-h, laguerre-l, chebyshev-t, chebyshev-u, gegenbauer-c, jacobi-p";
 
     /** File name → the message after {@code "odetab: "}, its position included. */
     private static final Map<String, String> EXPECTED = new TreeMap<>(Map.ofEntries(
@@ -33,7 +34,7 @@ class MalformedSpecTest {
             Map.entry("unknown-top-level-key.toml",
                     "2:1: unknown key 'tabels'; did you mean 'tables'? (allowed at the top: functions, tables, title)"),
             Map.entry("unknown-table-key.toml", "4:1: unknown key 'fromat'; did you mean 'format'? (a table has: function, kind, "
-                    + "grid, points, columns, format, rounding, out_of_range, precision_cap_bits, outputs, terms, search, count, of)"),
+                    + "grid, points, columns, format, rounding, out_of_range, precision_cap_bits, outputs, terms, search, count, of, weight_underflow)"),
             Map.entry("format-not-a-string.toml", "4:1: 'format' must be a string"),
             Map.entry("step-does-not-divide.toml", "3:32: the step 0.375 does not divide the range from 0 to 1 (8/3 steps)"),
             Map.entry("step-wrong-sign.toml", "3:33: the step 0.25 does not lead from 1 to -1"),
@@ -63,7 +64,28 @@ class MalformedSpecTest {
             Map.entry("family-needs-parameters.toml", "2:1: the family hermite-function takes parameters (n), so a table cannot "
                     + "name it directly: define a function under [functions] with family = \"hermite-function\" and its parameters, "
                     + "and name that function here"),
-            Map.entry("kind-quadrature.toml", "2:1: kind 'quadrature' is not available in this version of odetab (available: values, taylor, zeros)"),
+            Map.entry("quadrature-airy.toml", "3:1: a quadrature table needs a function defined with the family of its Gauss rule ("
+                    + GAUSS_FAMILIES + ") and its degree n; 'airy-ai' is a built-in family without a Gauss rule"),
+            Map.entry("quadrature-equation-function.toml", "8:1: a quadrature table needs a function defined with the family of its Gauss "
+                    + "rule (" + GAUSS_FAMILIES + ") and its degree n; 'wave' is an equation of its own"),
+            Map.entry("quadrature-family-without-rule.toml", "7:1: the family weber-u of function 'u' has no Gauss rule (quadrature tables take "
+                    + GAUSS_FAMILIES + ")"),
+            Map.entry("quadrature-non-integer-degree.toml",
+                    "7:1: a Gauss rule has an integer number of nodes n from 1 to 1000, and function 'h' has n = 10.5"),
+            Map.entry("quadrature-no-nodes.toml", "7:1: a Gauss rule has an integer number of nodes n from 1 to 1000, and function 'p0' has n = 0"),
+            Map.entry("quadrature-beyond-cap.toml", "3:1: n = 1001 is outside the allowed range: an integer 0 <= n <= 1000"),
+            Map.entry("quadrature-grid.toml", "8:1: a quadrature table takes no 'grid': its points are the nodes of the Gauss rule"),
+            Map.entry("quadrature-unknown-column.toml",
+                    "8:20: column 'value' is not available in a quadrature table (available: node, weight, scaled_weight)"),
+            Map.entry("quadrature-scaled-weight-legendre.toml", "8:20: column 'scaled_weight' belongs to Gauss–Hermite (w·e^(x²)) and "
+                    + "Gauss–Laguerre (w·e^x) rules; this table's rule is legendre-p"),
+            Map.entry("weight-underflow-on-decimal.toml", "9:1: weight_underflow applies to binary formats and double-double (which have "
+                    + "a smallest normal number), and this table's format is decimal:30"),
+            Map.entry("weight-underflow-on-values.toml", "4:1: 'weight_underflow' belongs to quadrature tables (kind = \"quadrature\")"),
+            Map.entry("weight-underflow-unknown.toml", "8:1: weight_underflow must be \"error\" (a weight below the smallest normal number "
+                    + "stops the build) or \"flush\" (it becomes 0, flagged in the column weight_flag)"),
+            Map.entry("weight-underflow-without-weight.toml",
+                    "9:1: weight_underflow = \"flush\" applies to the column weight, and this table has none"),
             Map.entry("singular-at.toml",
                     "3:1: x = -1 is a singular point of the equation (its coefficient of y'' vanishes there); choose an ordinary point"),
             Map.entry("bad-value-expression.toml", "3:18: expected ')' to close the '(' at column 16, found the end of the text"),

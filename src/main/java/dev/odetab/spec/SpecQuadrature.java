@@ -1,0 +1,130 @@
+package dev.odetab.spec;
+
+import dev.odetab.numeric.Format;
+import dev.odetab.numeric.Rational;
+import dev.odetab.ode.FunctionDef;
+import dev.odetab.tables.Column;
+import dev.odetab.tables.GaussFamily;
+import dev.odetab.tables.Grid;
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Set;
+import org.tomlj.TomlArray;
+import org.tomlj.TomlPosition;
+import org.tomlj.TomlTable;
+
+/**
+ * The keys of a quadrature table ({@code kind = "quadrature"}): the rule named by the table's
+ * function, its columns and {@code weight_underflow}, checked with positions.
+ */
+final class SpecQuadrature {
+    static final List<String> COLUMNS = List.of("node", "weight", "scaled_weight");
+
+    /** The rule and the columns (with {@code weight_flag} after {@code weight} when flushing). */
+    record Parsed(Grid.Quadrature grid, List<Column> columns) {
+    }
+
+    private final SpecFile spec;
+    private final TomlTable root;
+
+    SpecQuadrature(SpecFile spec, TomlTable root) {
+        this.spec = spec;
+        this.root = root;
+    }
+
+    Parsed table(List<String> base, TomlTable t, String fname, FunctionDef f, Format format) throws InputError {
+        for (String key : List.of("grid", "points")) {
+            if (t.contains(key)) {
+                throw spec.error(child(base, key), "a quadrature table takes no '" + key + "': its points are the nodes of the Gauss rule");
+            }
+        }
+        GaussFamily family = family(child(base, "function"), fname, f);
+        boolean flush = false;
+        if (t.contains("weight_underflow")) {
+            List<String> key = child(base, "weight_underflow");
+            Object v = t.get(List.of("weight_underflow"));
+            if (!"error".equals(v) && !"flush".equals(v)) {
+                throw spec.error(key, "weight_underflow must be \"error\" (a weight below the smallest normal number stops the build) "
+                        + "or \"flush\" (it becomes 0, flagged in the column weight_flag)");
+            }
+            if (!(format instanceof Format.BinaryFormat) && !(format instanceof Format.DoubleDouble)) {
+                throw spec.error(key, "weight_underflow applies to binary formats and double-double (which have a smallest normal number), "
+                        + "and this table's format is " + format.name());
+            }
+            flush = v.equals("flush");
+        }
+        List<Column> columns = columns(base, t, family);
+        if (flush) {
+            int w = columns.stream().map(Column::name).toList().indexOf("weight");
+            if (w < 0) {
+                throw spec.error(child(base, "weight_underflow"), "weight_underflow = \"flush\" applies to the column weight, and this table has none");
+            }
+            columns.add(w + 1, Column.quadrature("weight_flag"));
+        }
+        return new Parsed(new Grid.Quadrature(family, flush), columns);
+    }
+
+    /** The rule of the function: a family with a Gauss rule, an integer degree n from 1 to the cap. */
+    private GaussFamily family(List<String> key, String fname, FunctionDef f) throws InputError {
+        Object familyName = spec.functionNames().contains(fname) ? root.get(List.of("functions", fname, "family")) : null;
+        if (!(familyName instanceof String name)) {
+            throw spec.error(key, "a quadrature table needs a function defined with the family of its Gauss rule ("
+                    + GaussFamily.Kind.names() + ") and its degree n; '" + fname + "' is "
+                    + (spec.functionNames().contains(fname) ? "an equation of its own" : "a built-in family without a Gauss rule"));
+        }
+        GaussFamily.Kind kind = GaussFamily.Kind.of(name).orElseThrow(() -> spec.error(key, "the family " + name
+                + " of function '" + fname + "' has no Gauss rule (quadrature tables take " + GaussFamily.Kind.names() + ")"));
+        Rational n = f.parameters().get("n");
+        if (!n.isInteger() || n.signum() <= 0 || n.compareTo(Rational.of(GaussFamily.MAX_NODES)) > 0) {
+            throw spec.error(key, "a Gauss rule has an integer number of nodes n from 1 to " + GaussFamily.MAX_NODES
+                    + ", and function '" + fname + "' has n = " + n.toDecimalOrFraction());
+        }
+        Rational a = switch (kind) {
+            case LAGUERRE, JACOBI -> f.parameters().get("alpha");
+            case GEGENBAUER -> f.parameters().get("lambda");
+            default -> Rational.ZERO;
+        };
+        Rational b = kind == GaussFamily.Kind.JACOBI ? f.parameters().get("beta") : Rational.ZERO;
+        return new GaussFamily(kind, n.numerator().intValueExact(), a, b);
+    }
+
+    private List<Column> columns(List<String> base, TomlTable t, GaussFamily family) throws InputError {
+        List<Column> r = new ArrayList<>();
+        if (!t.contains("columns")) {
+            r.add(Column.quadrature("node"));
+            r.add(Column.quadrature("weight"));
+            return r;
+        }
+        TomlArray arr = t.getArray(List.of("columns"));
+        if (arr == null || arr.size() == 0) {
+            throw spec.error(child(base, "columns"), "'columns' must be a non-empty array of column names");
+        }
+        Set<String> seen = new LinkedHashSet<>();
+        for (int i = 0; i < arr.size(); i++) {
+            Object v = arr.get(i);
+            TomlPosition p = arr.inputPositionOf(i);
+            String where = spec.display() + ":" + p.line() + ":" + p.column();
+            String given = String.valueOf(v);
+            if (!(v instanceof String) || !COLUMNS.contains(given)) {
+                throw new InputError(where, "column '" + given + "' is not available in a quadrature table"
+                        + Suggestions.hint(given, COLUMNS) + " (available: " + String.join(", ", COLUMNS) + ")");
+            }
+            if (given.equals("scaled_weight") && !family.hasScaledWeight()) {
+                throw new InputError(where, "column 'scaled_weight' belongs to Gauss–Hermite (w·e^(x²)) and Gauss–Laguerre (w·e^x) rules; "
+                        + "this table's rule is " + family.kind().family());
+            }
+            if (!seen.add(given)) {
+                throw new InputError(where, "column '" + given + "' appears twice");
+            }
+            r.add(Column.quadrature(given));
+        }
+        return r;
+    }
+
+    private static List<String> child(List<String> base, String key) {
+        List<String> r = new ArrayList<>(base);
+        r.add(key);
+        return r;
+    }
+}
