@@ -22,12 +22,22 @@ public final class GridWalk {
 
     /** The jets at the given points (any order, duplicates allowed), in the order given. */
     public static List<Jet> enclose(FunctionDef f, List<Rational> points, int precBits) throws ExprException {
+        return enclose(f, points, precBits, (i, jet) -> { });
+    }
+
+    /**
+     * As {@link #enclose(FunctionDef, List, int)}, handing each jet to {@code each} (with its index)
+     * as soon as it is known; the leg holding the first point is walked first.
+     */
+    public static List<Jet> enclose(FunctionDef f, List<Rational> points, int precBits, java.util.function.ObjIntConsumer<Jet> each)
+            throws ExprException {
         Jet[] result = new Jet[points.size()];
         var poly = FunctionEvaluator.polynomial(f);
         if (poly.isPresent()) {
             for (int i = 0; i < points.size(); i++) {
                 Rational x = points.get(i);
                 result[i] = new Jet(Ball.of(poly.get().evaluate(x), precBits), Ball.of(poly.get().derivative().evaluate(x), precBits));
+                each.accept(result[i], i);
             }
             return List.of(result);
         }
@@ -39,7 +49,8 @@ public final class GridWalk {
         }
         up.sort((a, b) -> points.get(a).compareTo(points.get(b)));
         down.sort((a, b) -> points.get(b).compareTo(points.get(a)));
-        for (List<Integer> leg : List.of(up, down)) {
+        boolean downFirst = !points.isEmpty() && points.get(0).compareTo(f.at()) < 0;
+        for (List<Integer> leg : downFirst ? List.of(down, up) : List.of(up, down)) {
             Rational here = f.at();
             Jet state = start;
             for (int i : leg) {
@@ -49,6 +60,7 @@ public final class GridWalk {
                     here = x;
                 }
                 result[i] = state;
+                each.accept(state, i);
             }
         }
         return List.of(result);

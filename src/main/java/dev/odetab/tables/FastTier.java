@@ -16,6 +16,8 @@ import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import java.util.concurrent.CancellationException;
+import java.util.concurrent.CompletableFuture;
 
 /**
  * The fast tier of a values table: a chunk of a uniform grid walked in double-double balls
@@ -124,15 +126,17 @@ final class FastTier {
      * normalization point ({@link GridWalk}; sequential and deterministic), at
      * {@link FastWalk#START_BITS} bits and again at doubled precision for the starts whose balls
      * are wider than 2^−115 of the jet's size (long walks on oscillating solutions lose bits to
-     * the wrapping effect, METHODS §4), up to the table's cap; null when a walk would cross a
-     * singular point (the BigDecimal tier then reports it with the table's own points).
+     * the wrapping effect, METHODS §4), up to the table's cap. Each future is completed as soon as
+     * its start is final, so chunks can run while the walk goes on; all complete with null when a
+     * walk would cross a singular point (the BigDecimal tier then reports it with the table's own
+     * points), and exceptionally when a normalization constant fails.
      */
-    static List<Jet> chunkStarts(TableDef t, int size, int chunks) throws ExprException {
+    static void chunkStarts(TableDef t, int size, List<CompletableFuture<Jet>> starts) {
+        int chunks = starts.size();
         List<Rational> xs = new ArrayList<>(chunks);
         for (int c = 0; c < chunks; c++) {
             xs.add(t.grid().exactPoint(c * size));
         }
-        Jet[] starts = new Jet[chunks];
         List<Integer> wanted = new ArrayList<>();
         for (int c = 0; c < chunks; c++) {
             wanted.add(c);
@@ -144,22 +148,29 @@ final class FastTier {
                 for (int c : wanted) {
                     pts.add(xs.get(c));
                 }
-                List<Jet> jets = GridWalk.enclose(t.function(), pts, prec);
+                List<Integer> asked = wanted;
                 List<Integer> wider = new ArrayList<>();
-                for (int k = 0; k < wanted.size(); k++) {
-                    int c = wanted.get(k);
-                    starts[c] = jets.get(k);
-                    if (!narrow(jets.get(k)) && 2 * prec <= t.capBits()) {
+                boolean last = 2 * prec > t.capBits();
+                GridWalk.enclose(t.function(), pts, prec, (jet, k) -> {
+                    if (Thread.currentThread().isInterrupted()) {
+                        throw new CancellationException("table evaluation stopped");
+                    }
+                    int c = asked.get(k);
+                    if (narrow(jet) || last) {
+                        starts.get(c).complete(jet);
+                    } else {
                         wider.add(c);
                     }
-                }
+                });
+                wider.sort(null);
                 wanted = wider;
                 prec *= 2;
             }
         } catch (SingularCrossingException ex) {
-            return null;
+            starts.forEach(f -> f.complete(null));
+        } catch (ExprException | RuntimeException ex) {
+            starts.forEach(f -> f.completeExceptionally(ex));
         }
-        return List.of(starts);
     }
 
     /** Heuristic: both radii below 2^−115 of max(|y|, |y'|). */

@@ -102,8 +102,24 @@ public final class TableEvaluator {
         progress.start(t.name(), n);
         int size = chunkSize(t);
         int chunks = (n + size - 1) / size;
-        List<Jet> starts = FastTier.applies(t) && FunctionEvaluator.polynomial(t.function()).isEmpty()
-                ? FastTier.chunkStarts(t, size, chunks) : null;
+        List<CompletableFuture<Jet>> starts = null;
+        Thread walker = null;
+        if (FastTier.applies(t) && FunctionEvaluator.polynomial(t.function()).isEmpty()) {
+            List<CompletableFuture<Jet>> futures = new ArrayList<>();
+            for (int c = 0; c < chunks; c++) {
+                futures.add(new CompletableFuture<>());
+            }
+            starts = futures;
+            if (pool == null || chunks == 1) {
+                FastTier.chunkStarts(t, size, futures);
+            } else {
+                // The walk to the chunk starts is sequential: it runs beside the chunks, which wait only for their own start.
+                walker = new Thread(() -> FastTier.chunkStarts(t, size, futures), "odetab-chunk-starts");
+                walker.setDaemon(true);
+                walker.start();
+            }
+        }
+        List<CompletableFuture<Jet>> startList = starts;
         RowStore store = RowStore.forTable(t);
         BigDecimal maxRel = BigDecimal.ZERO;
         int maxPrec = 0;
@@ -115,8 +131,8 @@ public final class TableEvaluator {
                 while (next < chunks && window.size() < inFlight) {
                     int s = next * size;
                     int e = Math.min(n, s + size);
-                    Jet start = starts == null ? null : starts.get(next);
-                    Callable<Chunk> task = () -> chunk(t, s, e, start);
+                    CompletableFuture<Jet> start = startList == null ? null : startList.get(next);
+                    Callable<Chunk> task = () -> chunk(t, s, e, start == null ? null : startJet(start));
                     window.add(pool == null || chunks == 1 ? completed(task) : pool.submit(task));
                     next++;
                 }
@@ -131,6 +147,9 @@ public final class TableEvaluator {
         } finally {
             for (Future<Chunk> f : window) {
                 f.cancel(true);
+            }
+            if (walker != null) {
+                walker.interrupt();
             }
         }
         return new TableResult(t, store.finish(), maxRel, maxPrec);
@@ -153,6 +172,21 @@ public final class TableEvaluator {
 
     /** At most this many rows are held by chunks in flight (memory does not grow with the table). */
     private static final int ROWS_IN_FLIGHT = 16384;
+
+    /** The start of a chunk once the walk has it (null: the fast tier does not apply). */
+    private static Jet startJet(CompletableFuture<Jet> start) throws ExprException {
+        try {
+            return start.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("interrupted", e);
+        } catch (ExecutionException e) {
+            if (e.getCause() instanceof ExprException x) {
+                throw x;
+            }
+            throw new IllegalStateException(e.getCause());
+        }
+    }
 
     /** The rows of one chunk and its statistics. */
     private record Chunk(TableResult.Row[] rows, BigDecimal maxRel, int maxPrec) {
