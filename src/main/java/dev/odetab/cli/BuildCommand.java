@@ -16,7 +16,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
-import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
@@ -160,7 +159,7 @@ final class BuildCommand implements Callable<Integer> {
             }
             for (int i = 0; i < futures.size(); i++) {
                 failed = work.get(i);
-                TableResult r = get(futures.get(i));
+                TableResult r = TableEvaluator.await(futures.get(i));
                 results.add(r);
                 lines.add("odetab: table " + r.table().name() + ": " + r.rows().size() + " rows, working precision up to "
                         + r.maxPrecBits() + " bits");
@@ -178,28 +177,4 @@ final class BuildCommand implements Callable<Integer> {
         }
     }
 
-    private static TableResult get(Future<TableResult> f) throws ExprException, TableEvaluator.UndecidedException,
-            TableEvaluator.OutOfRangeException {
-        try {
-            return f.get();
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("interrupted", e);
-        } catch (ExecutionException e) {
-            Throwable c = e.getCause();
-            if (c instanceof ExprException x) {
-                throw x;
-            }
-            if (c instanceof TableEvaluator.UndecidedException x) {
-                throw x;
-            }
-            if (c instanceof TableEvaluator.OutOfRangeException x) {
-                throw x;
-            }
-            if (c instanceof RuntimeException x) {
-                throw x;
-            }
-            throw new IllegalStateException(c);
-        }
-    }
 }

@@ -202,7 +202,11 @@ public final class TableEvaluator {
         return f;
     }
 
-    private static Chunk await(Future<Chunk> f) throws ExprException, UndecidedException, OutOfRangeException {
+    /**
+     * The result of a task of table evaluation, with the evaluation's own exceptions unwrapped
+     * from the ExecutionException.
+     */
+    public static <T> T await(Future<T> f) throws ExprException, UndecidedException, OutOfRangeException {
         try {
             return f.get();
         } catch (InterruptedException e) {
