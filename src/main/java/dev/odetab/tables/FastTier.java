@@ -7,6 +7,7 @@ import dev.odetab.numeric.Format;
 import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.Rounding;
 import dev.odetab.numeric.RoundingMode;
+import dev.odetab.series.Continuation;
 import dev.odetab.series.FastWalk;
 import dev.odetab.series.GridWalk;
 import dev.odetab.series.Jet;
@@ -122,8 +123,9 @@ final class FastTier {
     }
 
     /**
-     * Balls containing y and y' at the first point of every chunk, by walks from the
-     * normalization point ({@link GridWalk}; sequential and deterministic), at
+     * Balls containing y and y' at the first point of every chunk, by a walk from the
+     * normalization point to the first start and then from start to start in grid order
+     * ({@link GridWalk}, {@link Continuation}; sequential and deterministic), at
      * {@link FastWalk#START_BITS} bits and again at doubled precision for the starts whose balls
      * are wider than 2^−115 of the jet's size (long walks on oscillating solutions lose bits to
      * the wrapping effect, METHODS §4), up to the table's cap. Each future is completed as soon as
@@ -148,21 +150,25 @@ final class FastTier {
                 for (int c : wanted) {
                     pts.add(xs.get(c));
                 }
-                List<Integer> asked = wanted;
                 List<Integer> wider = new ArrayList<>();
                 boolean last = 2 * prec > t.capBits();
-                GridWalk.enclose(t.function(), pts, prec, (jet, k) -> {
+                // In grid order, so that chunk k waits only for the walk up to its own start: a long
+                // jump to the first start, then from each start to the next.
+                Jet state = GridWalk.enclose(t.function(), List.of(pts.get(0)), prec).get(0);
+                for (int k = 0; k < pts.size(); k++) {
                     if (Thread.currentThread().isInterrupted()) {
                         throw new CancellationException("table evaluation stopped");
                     }
-                    int c = asked.get(k);
-                    if (narrow(jet) || last) {
-                        starts.get(c).complete(jet);
+                    if (k > 0) {
+                        state = Continuation.evaluate(t.function().equation(), pts.get(k - 1), state, pts.get(k), prec).jet();
+                    }
+                    int c = wanted.get(k);
+                    if (narrow(state) || last) {
+                        starts.get(c).complete(state);
                     } else {
                         wider.add(c);
                     }
-                });
-                wider.sort(null);
+                }
                 wanted = wider;
                 prec *= 2;
             }
