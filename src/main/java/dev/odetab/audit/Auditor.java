@@ -52,6 +52,10 @@ public final class Auditor {
      */
     public static AuditResult audit(TableDef t, Column column, Entries e, double tolerance)
             throws InputError, ExprException, UndecidedException {
+        if (t.grid() instanceof dev.odetab.tables.Grid.Found) {
+            throw new InputError(e.source(), "table " + t.name() + " is a zeros or quadrature table, whose points are found, not given;"
+                    + " audit compares entries at exact grid points (a values table)");
+        }
         if (t.grid().hasIrrationalPoints()) {
             throw new InputError(e.source(), "table " + t.name() + " has irrational grid points (Chebyshev nodes); audit needs exact grid points");
         }
