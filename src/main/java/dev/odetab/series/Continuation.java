@@ -38,30 +38,49 @@ public final class Continuation {
      */
     public static Result evaluate(Equation equation, Rational from, Jet start, Rational to, int precBits) {
         Equation eq = equation.reduced();
-        checkPath(eq, equation, from, to);
-        Rational center = from;
-        Jet state = start;
+        if (from.equals(to)) {
+            checkPath(eq, equation, from, to);
+            return new Result(start, 0, 0); // the start itself, exact zeros included
+        }
+        Carried r = walk(equation, CarriedState.of(eq, from, start), to, precBits);
+        return new Result(r.state().jet(), r.steps(), r.terms());
+    }
+
+    /** The state at the target and the work done. */
+    public record Carried(CarriedState state, int steps, int terms) {
+    }
+
+    /**
+     * As {@link #evaluate}, with the state carried as midpoints and one weighted error
+     * ({@link CarriedState}), so that walks made of many legs never re-wrap their error into
+     * componentwise balls.
+     *
+     * @throws SingularCrossingException when a real singular point lies between the state's point and {@code to}
+     */
+    public static Carried walk(Equation equation, CarriedState start, Rational to, int precBits) {
+        Equation eq = equation.reduced();
+        checkPath(eq, equation, start.x(), to);
+        CarriedState state = start;
         int steps = 0;
         int terms = 0;
         int maxTerms = 4 * precBits + 2000;
-        while (!center.equals(to)) {
-            Recurrence rec = new Recurrence(eq, center);
-            Rational remaining = to.subtract(center);
+        while (!state.x().equals(to)) {
+            Recurrence rec = new Recurrence(eq, state.x());
+            Rational remaining = to.subtract(state.x());
             Rational step = chooseStep(eq, rec, remaining);
             while (true) {
                 try {
-                    LocalSeries.Result r = LocalSeries.sum(rec, state.value(), state.derivative(), step, maxTerms, precBits);
-                    state = r.jet();
-                    terms += r.terms();
+                    CarriedState.Stepped next = state.step(eq, rec, step, maxTerms, precBits);
+                    state = next.state();
+                    terms += next.terms();
                     break;
                 } catch (LocalSeries.StepTooLongException e) {
                     step = step.divide(Rational.TWO);
                 }
             }
-            center = center.add(step);
             steps++;
         }
-        return new Result(state, steps, terms);
+        return new Carried(state, steps, terms);
     }
 
     /** The step toward the target: a signed power of two, or the whole remaining distance when that is shorter. */

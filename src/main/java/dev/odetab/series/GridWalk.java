@@ -51,16 +51,14 @@ public final class GridWalk {
         down.sort((a, b) -> points.get(b).compareTo(points.get(a)));
         boolean downFirst = !points.isEmpty() && points.get(0).compareTo(f.at()) < 0;
         for (List<Integer> leg : downFirst ? List.of(down, up) : List.of(up, down)) {
-            Rational here = f.at();
-            Jet state = start;
+            CarriedState state = CarriedState.of(f.equation().reduced(), f.at(), start);
             for (int i : leg) {
                 Rational x = points.get(i);
-                if (!x.equals(here)) {
-                    state = Continuation.evaluate(f.equation(), here, state, x, precBits).jet();
-                    here = x;
+                if (!x.equals(state.x())) {
+                    state = Continuation.walk(f.equation(), state, x, precBits).state();
                 }
-                result[i] = state;
-                each.accept(state, i);
+                result[i] = x.equals(f.at()) ? start : state.jet();
+                each.accept(result[i], i);
             }
         }
         return List.of(result);

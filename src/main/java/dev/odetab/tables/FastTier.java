@@ -7,6 +7,7 @@ import dev.odetab.numeric.Format;
 import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.Rounding;
 import dev.odetab.numeric.RoundingMode;
+import dev.odetab.series.CarriedState;
 import dev.odetab.series.Continuation;
 import dev.odetab.series.FastWalk;
 import dev.odetab.series.GridWalk;
@@ -154,17 +155,19 @@ final class FastTier {
                 boolean last = 2 * prec > t.capBits();
                 // In grid order, so that chunk k waits only for the walk up to its own start: a long
                 // jump to the first start, then from each start to the next.
-                Jet state = GridWalk.enclose(t.function(), List.of(pts.get(0)), prec).get(0);
+                Jet first = GridWalk.enclose(t.function(), List.of(pts.get(0)), prec).get(0);
+                CarriedState state = CarriedState.of(t.function().equation().reduced(), pts.get(0), first);
                 for (int k = 0; k < pts.size(); k++) {
                     if (Thread.currentThread().isInterrupted()) {
                         throw new CancellationException("table evaluation stopped");
                     }
                     if (k > 0) {
-                        state = Continuation.evaluate(t.function().equation(), pts.get(k - 1), state, pts.get(k), prec).jet();
+                        state = Continuation.walk(t.function().equation(), state, pts.get(k), prec).state();
                     }
+                    Jet jet = k == 0 ? first : state.jet();
                     int c = wanted.get(k);
-                    if (narrow(state) || last) {
-                        starts.get(c).complete(state);
+                    if (narrow(jet) || last) {
+                        starts.get(c).complete(jet);
                     } else {
                         wider.add(c);
                     }

@@ -2,16 +2,12 @@ package dev.odetab.tables;
 
 import dev.odetab.expr.Poly;
 import dev.odetab.numeric.Ball;
-import dev.odetab.numeric.ComplexBall;
-import dev.odetab.numeric.Directed;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.Equation;
+import dev.odetab.series.CarriedState;
 import dev.odetab.series.Jet;
 import dev.odetab.series.LocalSeries;
 import dev.odetab.series.Recurrence;
-import java.math.BigDecimal;
-import java.math.BigInteger;
-import java.math.MathContext;
 
 /**
  * A solution near an exact rational center c: its values at c + t for rational t, and
@@ -106,53 +102,30 @@ abstract sealed class LocalExpansion {
     }
 
     /**
-     * The series form. Its state at c is a pair of midpoints (m0, m1) and one error bound E in
-     * the weighted norm |(e0, e1)|_w = sqrt(w² e0² + e1²), w &gt; 0 a scale chosen at c: the
-     * exact (y(c), y'(c)) lies within E of (m0, m1), so y(c) ∈ m0 ± E/w and y'(c) ∈ m1 ± E.
-     *
-     * <p>A step to c + t ({@link #shift}) sums the series from the exact midpoints at full
-     * precision (its ball radius δ covers rounding and the tail), and carries the old error by
-     * linearity: the exact state is T·(exact old state), T = [[A, B], [A', B']] the canonical
-     * solutions (y(c) = 1, y'(c) = 0 and y(c) = 0, y'(c) = 1) at c + t, so
-     * E' &lt;= ‖D' T D⁻¹‖₂ E + w' δ0 + δ1 with D = diag(w, 1), D' = diag(w', 1). The spectral
-     * norm of a 2×2 matrix M is bounded from its Frobenius norm F and determinant exactly:
-     * ‖M‖₂² = (F² + sqrt(F⁴ − 4 det²))/2, evaluated on balls of the entries and rounded up.
-     * Where the solution oscillates (w ≈ sqrt(P0/P2)), D' T D⁻¹ is nearly a rotation and the
-     * bound stays close to 1: the error grows slowly along a long walk, unlike componentwise
-     * radii, which grow by a factor of about e^(ω t) per step (the wrapping effect of interval
-     * methods, Moore 1966). The weights are a heuristic choice; any positive w gives a bound.
+     * The series form: sums from balls containing y(c), y'(c), and shifts by carrying the state
+     * as midpoints and one error in a weighted norm ({@link CarriedState}, whose comment has the
+     * argument), so that a long walk does not suffer the wrapping effect of componentwise balls.
      */
     private static final class Series extends LocalExpansion {
-        /** Precision of the canonical solutions: they only scale an error bound (a heuristic choice). */
-        private static final int NORM_BITS = 64;
         private final Equation reduced;
         private final Recurrence rec;
+        /** The balls the series is summed from: as given, or m ± E/w, m ± E after a shift. */
         private final Jet state;
-        private final BigDecimal error;
-        private final BigDecimal weight;
+        /** The same state as midpoints and one weighted error, carried by {@link #shift}. */
+        private final CarriedState carried;
         private final int maxTerms;
 
         Series(Equation reduced, Rational center, Jet state, int precBits) {
-            this(reduced, center, state, null, precBits);
+            this(reduced, state, CarriedState.of(reduced, center, state), precBits);
         }
 
-        /** With {@code error} null, E is taken from the balls of {@code state}: E = w r0 + r1 &gt;= the weighted 2-norm. */
-        private Series(Equation reduced, Rational center, Jet state, BigDecimal error, int precBits) {
-            super(center, precBits);
+        private Series(Equation reduced, Jet state, CarriedState carried, int precBits) {
+            super(carried.x(), precBits);
             this.reduced = reduced;
-            this.rec = new Recurrence(reduced, center);
-            this.weight = weight(reduced, center);
-            this.state = error == null ? state
-                    : new Jet(Ball.of(state.value().mid(), Directed.divUp(error, weight)), Ball.of(state.derivative().mid(), error));
-            this.error = error != null ? error
-                    : Directed.addUp(Directed.mulUp(weight, state.value().rad()), state.derivative().rad());
+            this.rec = new Recurrence(reduced, carried.x());
+            this.state = state;
+            this.carried = carried;
             this.maxTerms = 4 * precBits + 2000;
-        }
-
-        /** Heuristic: sqrt|P0/P2| at c to two digits, at least 1/4: the local frequency or growth rate. */
-        private static BigDecimal weight(Equation reduced, Rational c) {
-            double d = Math.abs(reduced.p0().evaluate(c).doubleEstimate() / reduced.p2().evaluate(c).doubleEstimate());
-            return new BigDecimal(Math.max(0.25, Math.sqrt(d)), new MathContext(2));
         }
 
         @Override
@@ -177,35 +150,8 @@ abstract sealed class LocalExpansion {
 
         @Override
         LocalExpansion shift(Rational t) {
-            Jet mid = LocalSeries.sum(rec, Ball.exact(state.value().mid()), Ball.exact(state.derivative().mid()), t, maxTerms,
-                    precBits()).jet();
-            Rational to = center().add(t);
-            BigDecimal w1 = weight(reduced, to);
-            BigDecimal local = Directed.addUp(Directed.mulUp(w1, mid.value().rad()), mid.derivative().rad());
-            BigDecimal carried = BigDecimal.ZERO;
-            if (error.signum() != 0) {
-                Jet a = LocalSeries.sum(rec, Ball.ONE, Ball.ZERO, t, maxTerms, NORM_BITS).jet();
-                Jet b = LocalSeries.sum(rec, Ball.ZERO, Ball.ONE, t, maxTerms, NORM_BITS).jet();
-                Ball scale = Ball.exact(w1).divide(Ball.exact(weight), NORM_BITS);
-                carried = Directed.mulUp(spectralNormBound(a.value().multiply(scale, NORM_BITS), b.value().multiply(Ball.exact(w1), NORM_BITS),
-                        a.derivative().divide(Ball.exact(weight), NORM_BITS), b.derivative()), error);
-            }
-            return new Series(reduced, to, mid, Directed.addUp(carried, local), precBits());
-        }
-
-        /**
-         * Rigorous: an upper bound of ‖M‖₂ for every matrix M = [[p, q], [r, s]] with entries in
-         * the balls: ‖M‖₂² = (F² + sqrt(F⁴ − 4 det²))/2 (the larger eigenvalue of MᵀM, whose
-         * trace is F² and determinant det²), increasing in F² and in F⁴ − 4 det².
-         */
-        static BigDecimal spectralNormBound(Ball p, Ball q, Ball r, Ball s) {
-            int bits = NORM_BITS;
-            Ball f2 = p.square(bits).add(q.square(bits), bits).add(r.square(bits), bits).add(s.square(bits), bits);
-            Ball det = p.multiply(s, bits).subtract(q.multiply(r, bits), bits);
-            Ball disc = f2.square(bits).subtract(det.square(bits).multiplyExact(BigInteger.valueOf(4)), bits);
-            BigDecimal discUp = disc.upper().max(BigDecimal.ZERO);
-            BigDecimal sigma2 = Directed.divUp(Directed.addUp(f2.upper(), ComplexBall.sqrtUp(discUp, 20)), BigDecimal.valueOf(2));
-            return Directed.up(ComplexBall.sqrtUp(sigma2, 20));
+            CarriedState next = carried.step(reduced, rec, t, maxTerms, precBits()).state();
+            return new Series(reduced, next.jet(), next, precBits());
         }
     }
 
