@@ -14,10 +14,11 @@ import java.math.MathContext;
  * in the weighted norm |(e0, e1)|_w = sqrt(w² e0² + e1²): the exact (y(x), y'(x)) lies within E
  * of (m0, m1), so y(x) ∈ m0 ± E/w and y'(x) ∈ m1 ± E.
  *
- * <p>Trust level: Rigorous. A step to x + t ({@link #step}) sums the series from the exact
- * midpoints (its ball radii δ cover rounding and the tail, METHODS §2) and carries the old error
- * by linearity: the exact new state is T·(exact old state), T = [[A, B], [A', B']] with the
- * canonical solutions (y(x) = 1, y'(x) = 0 and y(x) = 0, y'(x) = 1) at x + t, so
+ * <p>Trust level: Rigorous. A step to x + t ({@link #step}) sums the series of the canonical
+ * solutions (y(x) = 1, y'(x) = 0 and y(x) = 0, y'(x) = 1) at x + t, T = [[A, B], [A', B']], as balls
+ * (rounding and tail included, METHODS §2); the exact midpoints go to T·m = m0·(A, A') +
+ * m1·(B, B') in ball arithmetic, whose radii δ the new error takes in; and the old error is
+ * carried by linearity: the exact new state is T·(exact old state), so
  * E' &lt;= ‖D' T D⁻¹‖₂ E + w' δ0 + δ1 with D = diag(w, 1), D' = diag(w', 1). ‖M‖₂ of a 2×2
  * matrix is bounded exactly from its Frobenius norm F and determinant:
  * ‖M‖₂² = (F² + sqrt(F⁴ − 4 det²))/2, evaluated on balls of the entries and rounded up.
@@ -33,7 +34,7 @@ import java.math.MathContext;
  * @param weight w &gt; 0
  */
 public record CarriedState(Rational x, BigDecimal m0, BigDecimal m1, BigDecimal error, BigDecimal weight) {
-    /** Precision of the canonical solutions: they only scale an error bound (a heuristic choice). */
+    /** Precision of the norm bound: it only scales an error bound (a heuristic choice). */
     private static final int NORM_BITS = 64;
 
     /** The state whose balls are {@code jet} at x: E = w r0 + r1, which bounds the weighted 2-norm. */
@@ -60,21 +61,27 @@ public record CarriedState(Rational x, BigDecimal m0, BigDecimal m1, BigDecimal 
      * @throws LocalSeries.StepTooLongException when t is too long for a tail bound
      */
     public Stepped step(Equation reduced, Recurrence rec, Rational t, int maxTerms, int precBits) {
-        LocalSeries.Result sum = LocalSeries.sum(rec, Ball.exact(m0), Ball.exact(m1), t, maxTerms, precBits);
-        Jet mid = sum.jet();
+        // The canonical solutions at x + t, at full precision: they give both the new midpoints
+        // (T·m = m0·A + m1·B, by linearity, in ball arithmetic) and the norm that carries E.
+        LocalSeries.Result sa = LocalSeries.sum(rec, Ball.ONE, Ball.ZERO, t, maxTerms, precBits);
+        LocalSeries.Result sb = LocalSeries.sum(rec, Ball.ZERO, Ball.ONE, t, maxTerms, precBits);
+        Jet a = sa.jet();
+        Jet b = sb.jet();
+        Ball e0 = Ball.exact(m0);
+        Ball e1 = Ball.exact(m1);
+        Ball value = a.value().multiply(e0, precBits).add(b.value().multiply(e1, precBits), precBits);
+        Ball derivative = a.derivative().multiply(e0, precBits).add(b.derivative().multiply(e1, precBits), precBits);
         Rational to = x.add(t);
         BigDecimal w1 = weight(reduced, to);
-        BigDecimal local = Directed.addUp(Directed.mulUp(w1, mid.value().rad()), mid.derivative().rad());
+        BigDecimal local = Directed.addUp(Directed.mulUp(w1, value.rad()), derivative.rad());
         BigDecimal carried = BigDecimal.ZERO;
         if (error.signum() != 0) {
-            Jet a = LocalSeries.sum(rec, Ball.ONE, Ball.ZERO, t, maxTerms, NORM_BITS).jet();
-            Jet b = LocalSeries.sum(rec, Ball.ZERO, Ball.ONE, t, maxTerms, NORM_BITS).jet();
             Ball scale = Ball.exact(w1).divide(Ball.exact(weight), NORM_BITS);
             carried = Directed.mulUp(spectralNormBound(a.value().multiply(scale, NORM_BITS), b.value().multiply(Ball.exact(w1), NORM_BITS),
                     a.derivative().divide(Ball.exact(weight), NORM_BITS), b.derivative()), error);
         }
-        return new Stepped(new CarriedState(to, mid.value().mid(), mid.derivative().mid(), Directed.addUp(carried, local), w1),
-                sum.terms());
+        return new Stepped(new CarriedState(to, value.mid(), derivative.mid(), Directed.addUp(carried, local), w1),
+                Math.max(sa.terms(), sb.terms()));
     }
 
     /** A step's result and the terms its main sum took. */
