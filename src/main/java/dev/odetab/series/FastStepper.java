@@ -38,9 +38,6 @@ public final class FastStepper {
     private final int order;
     /** P2 is the constant 1 (the reduced form is monic): a_0 = 1 exactly, no reciprocal needed. */
     private final boolean monicConstant;
-    private final DDBall[] bigA;
-    private final DDBall[] bigB;
-    private final DDBall[] bigD;
     private final double[] absA;
     private final double[] absB;
     private final double[] absD;
@@ -62,9 +59,6 @@ public final class FastStepper {
         p0 = balls(eq.p0());
         order = Math.max(eq.p2().degree(), Math.max(eq.p1().degree() + 1, eq.p0().degree() + 2));
         monicConstant = eq.p2().degree() == 0 && eq.p2().coefficient(0).equals(Rational.ONE);
-        bigA = new DDBall[order + 1];
-        bigB = new DDBall[order + 1];
-        bigD = new DDBall[order + 1];
         absA = new double[order + 1];
         absB = new double[order + 1];
         absD = new double[order + 1];
@@ -142,27 +136,22 @@ public final class FastStepper {
         // k_j(m) t^j = [A_j (m−j)(m−j−1) + B_j (m−j) + D_j] t^j with A_j = a_j/a_0,
         // B_j = b_(j−1)/a_0, D_j = d_(j−2)/a_0, so that u_m = c_m t^m = −(1/(m(m−1))) Σ_j k_j(m) t^j u_(m−j).
         for (int j = 1; j <= order; j++) {
-            bigA[j] = scaled(a[j], inv, powers[j]);
-            bigB[j] = scaled(b[j - 1], inv, powers[j]);
-            bigD[j] = j < 2 ? null : scaled(d[j - 2], inv, powers[j]);
-            DDBall ra = a[j] == null ? null : inv == null ? a[j] : a[j].multiply(inv);
-            DDBall rb = b[j - 1] == null ? null : inv == null ? b[j - 1] : b[j - 1].multiply(inv);
-            DDBall rd = j < 2 || d[j - 2] == null ? null : inv == null ? d[j - 2] : d[j - 2].multiply(inv);
+            DDBall ra = normalized(a[j], inv);
+            DDBall rb = normalized(b[j - 1], inv);
+            DDBall rd = j < 2 ? null : normalized(d[j - 2], inv);
             absA[j] = ra == null ? 0 : ra.absUpper();
             absB[j] = rb == null ? 0 : rb.absUpper();
             absD[j] = rd == null ? 0 : rd.absUpper();
+            // The inner loop works on (hi, lo, rad) triples with the allocation-free DDBall operations.
+            load(ra == null ? null : ra.multiply(powers[j]), j, 0);
+            load(rb == null ? null : rb.multiply(powers[j]), j, 1);
+            load(rd == null ? null : rd.multiply(powers[j]), j, 2);
         }
         double bigT = powers[1].absUpper();
         if (!(bigT > 0) || !Double.isFinite(bigT)) {
             return null;
         }
         DDBall u1 = dy.multiply(powers[1]);
-        // The inner loop works on (hi, lo, rad) triples with the allocation-free DDBall operations.
-        for (int jj = 1; jj <= order; jj++) {
-            load(bigA[jj], jj, 0);
-            load(bigB[jj], jj, 1);
-            load(bigD[jj], jj, 2);
-        }
         uh[0] = y.hi();
         ul[0] = y.lo();
         ur[0] = y.rad();
@@ -281,13 +270,9 @@ public final class FastStepper {
         }
     }
 
-    /** x · inv · tj, or null for an exact zero x; inv null means 1. */
-    private static DDBall scaled(DDBall x, DDBall inv, DDBall tj) {
-        if (x == null) {
-            return null;
-        }
-        DDBall r = inv == null ? x : x.multiply(inv);
-        return r.multiply(tj);
+    /** x · inv, or null for an exact zero x; inv null means 1. */
+    private static DDBall normalized(DDBall x, DDBall inv) {
+        return x == null ? null : inv == null ? x : x.multiply(inv);
     }
 
     /** Balls containing t^0 … t^J for a ball containing t (J = {@link #order()}). */
