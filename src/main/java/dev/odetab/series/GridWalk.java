@@ -22,22 +22,12 @@ public final class GridWalk {
 
     /** The jets at the given points (any order, duplicates allowed), in the order given. */
     public static List<Jet> enclose(FunctionDef f, List<Rational> points, int precBits) throws ExprException {
-        return enclose(f, points, precBits, (i, jet) -> { });
-    }
-
-    /**
-     * As {@link #enclose(FunctionDef, List, int)}, handing each jet to {@code each} (with its index)
-     * as soon as it is known; the leg holding the first point is walked first.
-     */
-    public static List<Jet> enclose(FunctionDef f, List<Rational> points, int precBits, java.util.function.ObjIntConsumer<Jet> each)
-            throws ExprException {
         Jet[] result = new Jet[points.size()];
         var poly = FunctionEvaluator.polynomial(f);
         if (poly.isPresent()) {
             for (int i = 0; i < points.size(); i++) {
                 Rational x = points.get(i);
                 result[i] = new Jet(Ball.of(poly.get().evaluate(x), precBits), Ball.of(poly.get().derivative().evaluate(x), precBits));
-                each.accept(result[i], i);
             }
             return List.of(result);
         }
@@ -49,8 +39,7 @@ public final class GridWalk {
         }
         up.sort((a, b) -> points.get(a).compareTo(points.get(b)));
         down.sort((a, b) -> points.get(b).compareTo(points.get(a)));
-        boolean downFirst = !points.isEmpty() && points.get(0).compareTo(f.at()) < 0;
-        for (List<Integer> leg : downFirst ? List.of(down, up) : List.of(up, down)) {
+        for (List<Integer> leg : List.of(up, down)) {
             CarriedState state = CarriedState.of(f.equation().reduced(), f.at(), start);
             for (int i : leg) {
                 Rational x = points.get(i);
@@ -58,7 +47,6 @@ public final class GridWalk {
                     state = Continuation.walk(f.equation(), state, x, precBits).state();
                 }
                 result[i] = x.equals(f.at()) ? start : state.jet();
-                each.accept(result[i], i);
             }
         }
         return List.of(result);
