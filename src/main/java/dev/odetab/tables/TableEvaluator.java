@@ -132,7 +132,7 @@ public final class TableEvaluator {
                     int s = next * size;
                     int e = Math.min(n, s + size);
                     CompletableFuture<Jet> start = startList == null ? null : startList.get(next);
-                    Callable<Chunk> task = () -> chunk(t, s, e, start == null ? null : startJet(start));
+                    Callable<Chunk> task = () -> chunk(t, s, e, start == null ? null : await(start));
                     window.add(pool == null || chunks == 1 ? completed(task) : pool.submit(task));
                     next++;
                 }
@@ -172,21 +172,6 @@ public final class TableEvaluator {
 
     /** At most this many rows are held by chunks in flight (memory does not grow with the table). */
     private static final int ROWS_IN_FLIGHT = 16384;
-
-    /** The start of a chunk once the walk has it (null: the fast tier does not apply). */
-    private static Jet startJet(CompletableFuture<Jet> start) throws ExprException {
-        try {
-            return start.get();
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("interrupted", e);
-        } catch (ExecutionException e) {
-            if (e.getCause() instanceof ExprException x) {
-                throw x;
-            }
-            throw new IllegalStateException(e.getCause());
-        }
-    }
 
     /** The rows of one chunk and its statistics. */
     private record Chunk(TableResult.Row[] rows, BigDecimal maxRel, int maxPrec) {
@@ -345,14 +330,6 @@ public final class TableEvaluator {
         Ball t = node.subtract(Ball.of(center, precBits + 20), precBits + 20);
         return LocalSeries.sum(new Recurrence(f.equation(), center), atCenter.value(), atCenter.derivative(), t,
                 4 * precBits + 2000, precBits).jet();
-    }
-
-    private static Poly derivative(Poly p, int order) {
-        Poly r = p;
-        for (int k = 0; k < order; k++) {
-            r = r.derivative();
-        }
-        return r;
     }
 
     private static Rational factorial(int k) {
