@@ -1,7 +1,7 @@
 package dev.odetab.audit;
 
 import dev.odetab.numeric.Format;
-import dev.odetab.spec.InputError;
+import dev.odetab.base.InputError;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;

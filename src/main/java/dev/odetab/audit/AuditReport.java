@@ -1,6 +1,6 @@
 package dev.odetab.audit;
 
-import dev.odetab.emit.Json;
+import dev.odetab.base.Json;
 import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.Comparator;

@@ -1,13 +1,13 @@
 package dev.odetab.audit;
 
-import dev.odetab.expr.ExprException;
+import dev.odetab.base.ExprException;
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.Format;
 import dev.odetab.numeric.Rational;
 import dev.odetab.series.FunctionEvaluator;
 import dev.odetab.series.GridWalk;
 import dev.odetab.series.Jet;
-import dev.odetab.spec.InputError;
+import dev.odetab.base.InputError;
 import dev.odetab.tables.Column;
 import dev.odetab.tables.TableDef;
 import java.math.BigDecimal;

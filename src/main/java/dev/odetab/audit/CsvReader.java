@@ -4,7 +4,7 @@ import com.univocity.parsers.csv.CsvParser;
 import com.univocity.parsers.csv.CsvParserSettings;
 import dev.odetab.numeric.Format;
 import dev.odetab.numeric.Rational;
-import dev.odetab.spec.InputError;
+import dev.odetab.base.InputError;
 import java.io.StringReader;
 import java.util.ArrayList;
 import java.util.Arrays;

@@ -1,6 +1,6 @@
 package dev.odetab.audit;
 
-import dev.odetab.spec.InputError;
+import dev.odetab.base.InputError;
 import dev.odetab.tables.TableDef;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;

@@ -2,9 +2,9 @@ package dev.odetab.cli;
 
 import dev.odetab.emit.Outputs;
 import dev.odetab.emit.Provenance;
-import dev.odetab.expr.ExprException;
+import dev.odetab.base.ExprException;
 import dev.odetab.series.SingularCrossingException;
-import dev.odetab.spec.InputError;
+import dev.odetab.base.InputError;
 import dev.odetab.spec.SpecFile;
 import dev.odetab.tables.TableDef;
 import dev.odetab.tables.TableEvaluator;

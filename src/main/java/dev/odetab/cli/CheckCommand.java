@@ -1,6 +1,6 @@
 package dev.odetab.cli;
 
-import dev.odetab.tables.ReferenceCheck;
+import dev.odetab.check.ReferenceCheck;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;

@@ -1,6 +1,6 @@
 package dev.odetab.cli;
 
-import dev.odetab.expr.ExprException;
+import dev.odetab.base.ExprException;
 import dev.odetab.numeric.DecimalDigits;
 import dev.odetab.numeric.Entry;
 import dev.odetab.numeric.Format;
@@ -12,7 +12,7 @@ import dev.odetab.ode.FunctionDef;
 import dev.odetab.series.FunctionEvaluator;
 import dev.odetab.series.PrecisionCapException;
 import dev.odetab.series.SingularCrossingException;
-import dev.odetab.spec.InputError;
+import dev.odetab.base.InputError;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;

@@ -1,6 +1,6 @@
 package dev.odetab.cli;
 
-import dev.odetab.expr.ExprException;
+import dev.odetab.base.ExprException;
 import java.io.PrintWriter;
 
 /** The one-line messages of bad input shared by the commands that take a FUNCTION. */

@@ -2,7 +2,7 @@ package dev.odetab.cli;
 
 import dev.odetab.ode.FunctionDef;
 import dev.odetab.spec.FunctionResolver;
-import dev.odetab.spec.InputError;
+import dev.odetab.base.InputError;
 import java.util.ArrayList;
 import java.util.List;
 import picocli.CommandLine.Option;

@@ -1,7 +1,7 @@
 package dev.odetab.cli;
 
 import dev.odetab.expr.ConstExpr;
-import dev.odetab.expr.ExprException;
+import dev.odetab.base.ExprException;
 import dev.odetab.expr.Poly;
 import dev.odetab.expr.RationalFunction;
 import dev.odetab.numeric.Ball;
@@ -16,7 +16,7 @@ import dev.odetab.series.Jet;
 import dev.odetab.series.LocalSeries;
 import dev.odetab.series.Recurrence;
 import dev.odetab.series.SingularCrossingException;
-import dev.odetab.spec.InputError;
+import dev.odetab.base.InputError;
 import java.io.PrintWriter;
 import java.math.BigDecimal;
 import java.util.List;

@@ -1,7 +1,7 @@
 package dev.odetab.cli;
 
 import dev.odetab.numeric.Rational;
-import dev.odetab.spec.InputError;
+import dev.odetab.base.InputError;
 
 /** Reading exact points from the command line. */
 final class Points {

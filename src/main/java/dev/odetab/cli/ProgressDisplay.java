@@ -1,6 +1,6 @@
 package dev.odetab.cli;
 
-import dev.odetab.tables.Progress;
+import dev.odetab.base.Progress;
 import java.io.IOException;
 import java.io.PrintStream;
 import java.nio.file.Files;

@@ -6,7 +6,7 @@ import com.univocity.parsers.csv.CsvWriterSettings;
 import dev.odetab.numeric.Entry;
 import dev.odetab.numeric.Format;
 import dev.odetab.tables.Column;
-import dev.odetab.tables.Progress;
+import dev.odetab.base.Progress;
 import dev.odetab.tables.TableResult;
 import java.io.IOException;
 import java.io.OutputStream;

@@ -8,7 +8,7 @@ import dev.odetab.numeric.Rounding;
 import dev.odetab.numeric.RoundingMode;
 import dev.odetab.tables.Column;
 import dev.odetab.tables.Grid;
-import dev.odetab.tables.Progress;
+import dev.odetab.base.Progress;
 import dev.odetab.tables.TableResult;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;

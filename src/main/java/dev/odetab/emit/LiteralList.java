@@ -1,6 +1,6 @@
 package dev.odetab.emit;
 
-import dev.odetab.tables.Progress;
+import dev.odetab.base.Progress;
 import dev.odetab.tables.TableResult;
 import java.util.AbstractList;
 import java.util.AbstractSequentialList;

@@ -1,6 +1,8 @@
 package dev.odetab.emit;
 
-import dev.odetab.tables.Progress;
+import dev.odetab.base.Json;
+
+import dev.odetab.base.Progress;
 import dev.odetab.tables.TableResult;
 import java.io.BufferedOutputStream;
 import java.io.IOException;

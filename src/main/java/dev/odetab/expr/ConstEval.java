@@ -1,5 +1,7 @@
 package dev.odetab.expr;
 
+import dev.odetab.base.ExprException;
+
 import dev.odetab.expr.ConstExpr.Binary;
 import dev.odetab.expr.ConstExpr.Call;
 import dev.odetab.expr.ConstExpr.Negate;

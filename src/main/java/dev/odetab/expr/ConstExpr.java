@@ -1,5 +1,7 @@
 package dev.odetab.expr;
 
+import dev.odetab.base.ExprException;
+
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.Rational;
 import java.util.Optional;

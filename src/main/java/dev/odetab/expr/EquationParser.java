@@ -1,5 +1,7 @@
 package dev.odetab.expr;
 
+import dev.odetab.base.ExprException;
+
 import dev.odetab.expr.Linear.Form;
 import dev.odetab.expr.Syntax.Bin;
 import dev.odetab.expr.Syntax.EquationNode;

@@ -1,5 +1,7 @@
 package dev.odetab.expr;
 
+import dev.odetab.base.ExprException;
+
 import dev.odetab.expr.Syntax.Context;
 import dev.odetab.expr.Syntax.Node;
 import dev.odetab.numeric.Rational;

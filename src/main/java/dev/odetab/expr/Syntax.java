@@ -1,5 +1,7 @@
 package dev.odetab.expr;
 
+import dev.odetab.base.ExprException;
+
 import dev.odetab.numeric.Rational;
 import java.math.BigDecimal;
 import java.util.ArrayList;

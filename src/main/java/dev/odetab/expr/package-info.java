@@ -7,3 +7,5 @@
  * {@link dev.odetab.expr.ExprException} carrying the exact 1-based column in the given text.
  */
 package dev.odetab.expr;
+
+import dev.odetab.base.ExprException;

@@ -1,6 +1,6 @@
 package dev.odetab.series;
 
-import dev.odetab.expr.ExprException;
+import dev.odetab.base.ExprException;
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.FunctionDef;

@@ -1,6 +1,8 @@
 package dev.odetab.spec;
 
-import dev.odetab.expr.ExprException;
+import dev.odetab.base.InputError;
+
+import dev.odetab.base.ExprException;
 import dev.odetab.expr.ExprParser;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.FunctionDef;

@@ -1,8 +1,10 @@
 package dev.odetab.spec;
 
+import dev.odetab.base.InputError;
+
 import dev.odetab.expr.ConstExpr;
 import dev.odetab.expr.EquationParser;
-import dev.odetab.expr.ExprException;
+import dev.odetab.base.ExprException;
 import dev.odetab.expr.ExprParser;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.Equation;

@@ -1,5 +1,7 @@
 package dev.odetab.spec;
 
+import dev.odetab.base.InputError;
+
 import dev.odetab.numeric.Format;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.FunctionDef;

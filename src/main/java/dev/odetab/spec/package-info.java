@@ -6,3 +6,5 @@
  * never an unchecked exception.
  */
 package dev.odetab.spec;
+
+import dev.odetab.base.InputError;

@@ -1,6 +1,6 @@
 package dev.odetab.tables;
 
-import dev.odetab.expr.ExprException;
+import dev.odetab.base.ExprException;
 import dev.odetab.numeric.DDBall;
 import dev.odetab.numeric.Entry;
 import dev.odetab.numeric.Format;

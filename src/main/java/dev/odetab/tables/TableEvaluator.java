@@ -1,6 +1,10 @@
 package dev.odetab.tables;
 
-import dev.odetab.expr.ExprException;
+import dev.odetab.tables.rows.RowStore;
+
+import dev.odetab.base.Progress;
+
+import dev.odetab.base.ExprException;
 import dev.odetab.expr.Poly;
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.Entry;

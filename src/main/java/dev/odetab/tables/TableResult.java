@@ -1,5 +1,9 @@
 package dev.odetab.tables;
 
+import dev.odetab.tables.rows.StoredRows;
+
+import dev.odetab.tables.rows.RowStore;
+
 import dev.odetab.numeric.Entry;
 import dev.odetab.numeric.Rational;
 import java.math.BigDecimal;

@@ -1,6 +1,8 @@
 package dev.odetab.tables;
 
-import dev.odetab.expr.ExprException;
+import dev.odetab.series.LocalExpansion;
+
+import dev.odetab.base.ExprException;
 import dev.odetab.expr.Poly;
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.Directed;

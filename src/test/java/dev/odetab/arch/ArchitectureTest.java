@@ -26,9 +26,10 @@ import org.junit.jupiter.api.Test;
  */
 class ArchitectureTest {
     private static final Path ROOT = Path.of("src/main/java/dev/odetab");
-    private static final Map<String, Integer> LAYER = Map.of(
-            "numeric", 0, "expr", 1, "ode", 2, "series", 3,
-            "spec", 4, "tables", 4, "emit", 4, "audit", 4, "cli", 5);
+    private static final Map<String, Integer> LAYER = Map.ofEntries(
+            Map.entry("base", 0), Map.entry("numeric", 1), Map.entry("expr", 2), Map.entry("ode", 3), Map.entry("series", 4),
+            Map.entry("spec", 5), Map.entry("tables", 5), Map.entry("emit", 5), Map.entry("audit", 5), Map.entry("check", 5),
+            Map.entry("cli", 6));
     private static final Pattern IMPORT = Pattern.compile("^import (?:static )?dev\\.odetab\\.([a-z]+)\\.", Pattern.MULTILINE);
 
     private static Map<String, Set<String>> edges() throws IOException {

@@ -8,7 +8,7 @@ import dev.odetab.ode.FunctionDef;
 import dev.odetab.ode.family.Catalog;
 import dev.odetab.tables.Column;
 import dev.odetab.tables.Grid;
-import dev.odetab.tables.Progress;
+import dev.odetab.base.Progress;
 import dev.odetab.tables.TableDef;
 import dev.odetab.tables.TableEvaluator;
 import dev.odetab.tables.TableResult;

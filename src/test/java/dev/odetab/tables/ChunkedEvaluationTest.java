@@ -1,5 +1,7 @@
 package dev.odetab.tables;
 
+import dev.odetab.base.Progress;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 

@@ -1,7 +1,7 @@
 package dev.odetab.ode.family;
 
 import dev.odetab.expr.ConstExpr;
-import dev.odetab.expr.ExprException;
+import dev.odetab.base.ExprException;
 import dev.odetab.expr.ExprParser;
 import dev.odetab.numeric.Rational;
 import java.util.Map;

@@ -1,6 +1,6 @@
-package dev.odetab.tables;
+package dev.odetab.check;
 
-import dev.odetab.expr.ExprException;
+import dev.odetab.base.ExprException;
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.BallFunctions;
 import dev.odetab.numeric.Rational;

@@ -1,4 +1,4 @@
-package dev.odetab.spec;
+package dev.odetab.base;
 
 /**
  * Bad input from the user (exit code 2): a message and where the problem is, as

@@ -1,4 +1,4 @@
-package dev.odetab.emit;
+package dev.odetab.base;
 
 import java.util.List;
 import java.util.Map;

@@ -1,4 +1,4 @@
-package dev.odetab.tables;
+package dev.odetab.series;
 
 import dev.odetab.expr.Poly;
 import dev.odetab.numeric.Ball;
@@ -22,7 +22,7 @@ import dev.odetab.series.Recurrence;
  * equation), evaluated in ball arithmetic over the same ball of x; it is null where that ball
  * of P2 contains 0 (the cell reaches a singular point), which callers treat as "not proven".
  */
-abstract sealed class LocalExpansion {
+public abstract sealed class LocalExpansion {
     private final Rational center;
     private final int precBits;
 
@@ -32,28 +32,28 @@ abstract sealed class LocalExpansion {
     }
 
     /** Enclosures of y, y' and y'' (y'' null when the equation cannot give it there) over a set of points. */
-    record Range(Ball value, Ball derivative, Ball second) {
+    public record Range(Ball value, Ball derivative, Ball second) {
         /** The enclosure of y^(k), k = 0, 1, 2. */
-        Ball order(int k) {
+        public Ball order(int k) {
             return k == 0 ? value : k == 1 ? derivative : second;
         }
     }
 
     /** The series of a non-polynomial solution at {@code center}, whose y(c), y'(c) lie in {@code state}. */
-    static LocalExpansion series(Equation reduced, Rational center, Jet state, int precBits) {
+    public static LocalExpansion series(Equation reduced, Rational center, Jet state, int precBits) {
         return new Series(reduced, center, state, precBits);
     }
 
     /** The exact polynomial solution {@code p}, expanded at {@code center}. */
-    static LocalExpansion polynomial(Poly p, Rational center, int precBits) {
+    public static LocalExpansion polynomial(Poly p, Rational center, int precBits) {
         return new Polynomial(p, center, precBits);
     }
 
-    Rational center() {
+    public Rational center() {
         return center;
     }
 
-    int precBits() {
+    public int precBits() {
         return precBits;
     }
 
@@ -63,7 +63,7 @@ abstract sealed class LocalExpansion {
      * @throws LocalSeries.StepTooLongException when t lies outside the disk where the series
      *     tail can be bounded (the caller takes a shorter step)
      */
-    abstract Jet at(Rational t);
+    public abstract Jet at(Rational t);
 
     /**
      * Rigorous: enclosures of y, y', y'' at every point c + t, t in {@code t} (Horner's rule
@@ -71,10 +71,10 @@ abstract sealed class LocalExpansion {
      *
      * @throws LocalSeries.StepTooLongException as for {@link #at}
      */
-    abstract Range over(Ball t);
+    public abstract Range over(Ball t);
 
     /** The same solution expanded at c + t, from this expansion's value there. */
-    abstract LocalExpansion shift(Rational t);
+    public abstract LocalExpansion shift(Rational t);
 
     /**
      * Heuristic: a cell width on which one series enclosure is likely to decide the sign of g
@@ -82,17 +82,17 @@ abstract sealed class LocalExpansion {
      * METHODS §2 (about a sixth of a period where the solution oscillates); +∞ for a
      * polynomial, whose width the caller chooses. Never part of a bound.
      */
-    abstract double cellWidthEstimate();
+    public abstract double cellWidthEstimate();
 
     /** The ball from c + lo to c + hi as a step from this center: lo − c and hi − c, both ends included. */
-    Ball steps(Rational lo, Rational hi) {
+    public Ball steps(Rational lo, Rational hi) {
         Ball a = Ball.of(lo.subtract(center), precBits + 20);
         Ball b = Ball.of(hi.subtract(center), precBits + 20);
         return a.union(b);
     }
 
     /** y'' = −(P1 y' + P0 y)/P2 over the ball x (null when P2 may vanish there). */
-    static Ball second(Equation reduced, Ball x, Ball y, Ball dy, int precBits) {
+    public static Ball second(Equation reduced, Ball x, Ball y, Ball dy, int precBits) {
         Ball p2 = reduced.p2().evaluate(x, precBits);
         if (p2.containsZero()) {
             return null;
@@ -129,19 +129,19 @@ abstract sealed class LocalExpansion {
         }
 
         @Override
-        Jet at(Rational t) {
+        public Jet at(Rational t) {
             return LocalSeries.sum(rec, state.value(), state.derivative(), t, maxTerms, precBits()).jet();
         }
 
         @Override
-        Range over(Ball t) {
+        public Range over(Ball t) {
             Jet j = LocalSeries.sum(rec, state.value(), state.derivative(), t, maxTerms, precBits()).jet();
             Ball x = Ball.of(center(), precBits() + 20).add(t, precBits());
             return new Range(j.value(), j.derivative(), second(reduced, x, j.value(), j.derivative(), precBits()));
         }
 
         @Override
-        double cellWidthEstimate() {
+        public double cellWidthEstimate() {
             double a0 = Math.abs(reduced.p2().evaluate(center()).doubleEstimate());
             double b0 = Math.abs(reduced.p1().evaluate(center()).doubleEstimate()) / a0;
             double d0 = Math.abs(reduced.p0().evaluate(center()).doubleEstimate()) / a0;
@@ -149,7 +149,7 @@ abstract sealed class LocalExpansion {
         }
 
         @Override
-        LocalExpansion shift(Rational t) {
+        public LocalExpansion shift(Rational t) {
             CarriedState next = carried.step(reduced, rec, t, maxTerms, precBits()).state();
             return new Series(reduced, next.jet(), next, precBits());
         }
@@ -189,22 +189,22 @@ abstract sealed class LocalExpansion {
         }
 
         @Override
-        Jet at(Rational t) {
+        public Jet at(Rational t) {
             return new Jet(Ball.of(q0.evaluate(t), precBits()), Ball.of(q1.evaluate(t), precBits()));
         }
 
         @Override
-        Range over(Ball t) {
+        public Range over(Ball t) {
             return new Range(horner(balls[0], t), horner(balls[1], t), horner(balls[2], t));
         }
 
         @Override
-        double cellWidthEstimate() {
+        public double cellWidthEstimate() {
             return Double.POSITIVE_INFINITY;
         }
 
         @Override
-        LocalExpansion shift(Rational t) {
+        public LocalExpansion shift(Rational t) {
             return new Polynomial(p, center().add(t), precBits());
         }
     }

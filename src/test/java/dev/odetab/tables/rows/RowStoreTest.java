@@ -1,4 +1,16 @@
-package dev.odetab.tables;
+package dev.odetab.tables.rows;
+
+import dev.odetab.tables.TableResult;
+
+import dev.odetab.tables.TableDef;
+
+import dev.odetab.tables.Grid;
+
+import dev.odetab.tables.Column;
+
+import dev.odetab.tables.rows.StoredRows;
+
+import dev.odetab.tables.rows.RowStore;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;

@@ -1,4 +1,6 @@
-package dev.odetab.tables;
+package dev.odetab.tables.rows;
+
+import dev.odetab.tables.TableResult;
 
 import dev.odetab.numeric.Entry;
 import dev.odetab.numeric.Format;

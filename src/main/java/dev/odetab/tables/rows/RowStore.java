@@ -1,4 +1,7 @@
-package dev.odetab.tables;
+package dev.odetab.tables.rows;
+
+import dev.odetab.tables.TableResult;
+import dev.odetab.tables.TableDef;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;

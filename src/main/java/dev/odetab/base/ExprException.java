@@ -1,4 +1,4 @@
-package dev.odetab.expr;
+package dev.odetab.base;
 
 /**
  * A malformed or meaningless expression or equation, with the position of the fault.

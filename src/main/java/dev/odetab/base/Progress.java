@@ -1,4 +1,4 @@
-package dev.odetab.tables;
+package dev.odetab.base;
 
 /**
  * Receives the progress of table evaluations: how many rows each table has and how many are

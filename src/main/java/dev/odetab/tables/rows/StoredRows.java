@@ -1,4 +1,6 @@
-package dev.odetab.tables;
+package dev.odetab.tables.rows;
+
+import dev.odetab.tables.TableResult;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
