@@ -17,9 +17,9 @@ import java.math.MathContext;
  * real roots of the reduced P2 on the closed segment are counted exactly (Sturm), and any root
  * there is an error that names it.
  *
- * <p>Step lengths are a heuristic choice (half the contraction radius of METHODS §2 at the
- * center, shortened where the equation oscillates or grows fast); a step whose tail bound
- * cannot be established is halved and tried again. Digits lost to cancellation show in the
+ * <p>Step lengths are a heuristic choice ({@link StepChooser}, by default
+ * {@link StepChooser.Use#CONTINUATION}); a step whose tail bound cannot be established is
+ * halved and tried again. Digits lost to cancellation show in the
  * radius; the caller's precision loop pays for them.
  */
 public final class Continuation {
@@ -58,16 +58,26 @@ public final class Continuation {
      * @throws SingularCrossingException when a real singular point lies between the state's point and {@code to}
      */
     public static Carried walk(Equation equation, CarriedState start, Rational to, int precBits) {
+        return walk(equation, start, to, precBits, StepChooser.Use.CONTINUATION);
+    }
+
+    /**
+     * As {@link #walk(Equation, CarriedState, Rational, int)}, with the steps chosen for
+     * {@code use} ({@link StepChooser}).
+     *
+     * @throws SingularCrossingException when a real singular point lies between the state's point and {@code to}
+     */
+    public static Carried walk(Equation equation, CarriedState start, Rational to, int precBits, StepChooser.Use use) {
         Equation eq = equation.reduced();
         checkPath(eq, equation, start.x(), to);
         CarriedState state = start;
         int steps = 0;
         int terms = 0;
-        int maxTerms = 4 * precBits + 2000;
+        int maxTerms = StepChooser.chooseMaxTerms(precBits);
         while (!state.x().equals(to)) {
             Recurrence rec = new Recurrence(eq, state.x());
             Rational remaining = to.subtract(state.x());
-            Rational step = chooseStep(eq, rec, remaining);
+            Rational step = StepChooser.chooseStep(eq, rec, remaining, use);
             while (true) {
                 try {
                     CarriedState.Stepped next = state.step(eq, rec, step, maxTerms, precBits);
@@ -81,26 +91,6 @@ public final class Continuation {
             steps++;
         }
         return new Carried(state, steps, terms);
-    }
-
-    /** The step toward the target: a signed power of two, or the whole remaining distance when that is shorter. */
-    private static Rational chooseStep(Equation eq, Recurrence rec, Rational remaining) {
-        double rho = LocalSeries.contractionRadiusEstimate(rec);
-        Rational c = rec.center();
-        double a0 = Math.abs(eq.p2().evaluate(c).doubleEstimate());
-        double b0 = Math.abs(eq.p1().evaluate(c).doubleEstimate()) / a0;
-        double d0 = Math.abs(eq.p0().evaluate(c).doubleEstimate()) / a0;
-        double target = Math.min(0.5 * rho, 2.0 / (1.0 + Math.sqrt(d0) + b0));
-        double dist = Math.abs(remaining.doubleEstimate());
-        if (dist <= target) {
-            return remaining;
-        }
-        int e = Math.getExponent(target);
-        Rational h = e >= 0 ? Rational.of(BigInteger.ONE.shiftLeft(e)) : Rational.of(BigInteger.ONE, BigInteger.ONE.shiftLeft(-e));
-        if (h.compareTo(remaining.abs()) >= 0) {
-            return remaining;
-        }
-        return remaining.signum() < 0 ? h.negate() : h;
     }
 
     /**

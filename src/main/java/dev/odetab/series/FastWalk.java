@@ -11,7 +11,8 @@ import dev.odetab.ode.Equation;
  *
  * <p>Trust level: Rigorous. The state at x0 is given as BigDecimal balls (the caller's long
  * jump, {@link GridWalk} at {@link #START_BITS} bits), converted outward to {@link DDBall}s. Every
- * later center is x0 + k·h/s (s sub-steps per grid step, exact rationals) enclosed by a ball
+ * later center is x0 + k·h/s (s sub-steps per grid step, chosen by
+ * {@link StepChooser#chooseSubsteps}; exact rationals) enclosed by a ball
  * built by rigorous additions of a ball containing h/s; each step encloses the state at the next
  * exact center. So every non-null jet contains y and y' at its point. A step that cannot be
  * proven ends the walk: the remaining jets are null and the caller evaluates them in the
@@ -49,7 +50,7 @@ public final class FastWalk {
             return out;
         }
         FastStepper stepper = new FastStepper(reduced);
-        int sub = substeps(reduced, x0, last, h);
+        int sub = StepChooser.chooseSubsteps(reduced, x0, last, h);
         Rational exactStep = h.divide(Rational.of(sub));
         DDBall step = DDBall.of(exactStep);
         DDBall[] powers = stepper.powers(step);
@@ -66,25 +67,5 @@ public final class FastWalk {
             out[i] = state;
         }
         return out;
-    }
-
-    /**
-     * Heuristic: sub-steps per grid step, so that each step stays within half the contraction
-     * radius of METHODS §2 and about one local oscillation length (as {@link Continuation} chooses
-     * its steps), judged at both ends of the run.
-     */
-    private static int substeps(Equation reduced, Rational a, Rational b, Rational h) {
-        double target = Double.POSITIVE_INFINITY;
-        for (Rational c : new Rational[] {a, b}) {
-            Recurrence rec = new Recurrence(reduced, c);
-            double rho = LocalSeries.contractionRadiusEstimate(rec);
-            double a0 = Math.abs(reduced.p2().evaluate(c).doubleEstimate());
-            double b0 = Math.abs(reduced.p1().evaluate(c).doubleEstimate()) / a0;
-            double d0 = Math.abs(reduced.p0().evaluate(c).doubleEstimate()) / a0;
-            target = Math.min(target, Math.min(0.25 * rho, 1.0 / (1.0 + Math.sqrt(d0) + b0)));
-        }
-        double len = Math.abs(h.doubleEstimate());
-        double s = Math.ceil(len / target);
-        return s <= 1 ? 1 : s >= 1 << 16 ? 1 << 16 : (int) s;
     }
 }

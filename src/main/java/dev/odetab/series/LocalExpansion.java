@@ -78,9 +78,8 @@ public abstract sealed class LocalExpansion {
 
     /**
      * Heuristic: a cell width on which one series enclosure is likely to decide the sign of g
-     * or of g': min(ρ/2, 1/(1 + √|P0/P2| + |P1/P2|)) at c, ρ the contraction radius of
-     * METHODS §2 (about a sixth of a period where the solution oscillates); +∞ for a
-     * polynomial, whose width the caller chooses. Never part of a bound.
+     * or of g': the {@link StepChooser.Use#ZERO_CELL} length at c; +∞ for a polynomial, whose
+     * width the caller chooses. Never part of a bound.
      */
     public abstract double cellWidthEstimate();
 
@@ -125,7 +124,7 @@ public abstract sealed class LocalExpansion {
             this.rec = new Recurrence(reduced, carried.x());
             this.state = state;
             this.carried = carried;
-            this.maxTerms = 4 * precBits + 2000;
+            this.maxTerms = StepChooser.chooseMaxTerms(precBits);
         }
 
         @Override
@@ -142,10 +141,7 @@ public abstract sealed class LocalExpansion {
 
         @Override
         public double cellWidthEstimate() {
-            double a0 = Math.abs(reduced.p2().evaluate(center()).doubleEstimate());
-            double b0 = Math.abs(reduced.p1().evaluate(center()).doubleEstimate()) / a0;
-            double d0 = Math.abs(reduced.p0().evaluate(center()).doubleEstimate()) / a0;
-            return Math.min(0.5 * LocalSeries.contractionRadiusEstimate(rec), 1.0 / (1.0 + Math.sqrt(d0) + b0));
+            return StepChooser.lengthEstimate(reduced, rec, StepChooser.Use.ZERO_CELL);
         }
 
         @Override

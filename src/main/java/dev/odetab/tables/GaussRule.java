@@ -11,6 +11,7 @@ import dev.odetab.ode.Equation;
 import dev.odetab.series.Jet;
 import dev.odetab.series.LocalSeries;
 import dev.odetab.series.Recurrence;
+import dev.odetab.series.StepChooser;
 import java.math.BigDecimal;
 import java.math.BigInteger;
 import java.math.MathContext;
@@ -495,7 +496,7 @@ final class GaussRule {
                 return exactNode(f, center, atCenter.slopeExact()).enclose(precBits);
             }
             int wp = precBits + 20;
-            int maxTerms = 4 * wp + 2000;
+            int maxTerms = StepChooser.chooseMaxTerms(wp);
             Ball y0 = atCenter.valueBall(wp);
             Ball y1 = atCenter.slopeBall(wp);
             int digits = Precision.digits10(wp);

@@ -18,6 +18,7 @@ import dev.odetab.series.GridWalk;
 import dev.odetab.series.Jet;
 import dev.odetab.series.LocalSeries;
 import dev.odetab.series.Recurrence;
+import dev.odetab.series.StepChooser;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;
@@ -333,7 +334,7 @@ public final class TableEvaluator {
     private static Jet nodeJet(FunctionDef f, Rational center, Jet atCenter, Ball node, int precBits) {
         Ball t = node.subtract(Ball.of(center, precBits + 20), precBits + 20);
         return LocalSeries.sum(new Recurrence(f.equation(), center), atCenter.value(), atCenter.derivative(), t,
-                4 * precBits + 2000, precBits).jet();
+                StepChooser.chooseMaxTerms(precBits), precBits).jet();
     }
 
     private static Rational factorial(int k) {
