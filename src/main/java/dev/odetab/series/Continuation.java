@@ -1,6 +1,8 @@
 package dev.odetab.series;
 
+import dev.odetab.base.ExprException;
 import dev.odetab.expr.Poly;
+import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.Equation;
 import java.math.BigInteger;
@@ -44,6 +46,42 @@ public final class Continuation {
         }
         Carried r = walk(equation, CarriedState.of(eq, from, start), to, precBits);
         return new Result(r.state().jet(), r.steps(), r.terms());
+    }
+
+    /**
+     * Balls containing y(to) and y'(to) for the solution that {@code start} names.
+     *
+     * @throws ExprException when a normalization constant cannot be evaluated
+     * @throws SingularCrossingException when a real singular point lies between the start's point and {@code to}
+     */
+    public static Result evaluate(Start start, Rational to, int precBits) throws ExprException {
+        return evaluate(start.equation(), start.point(), start.jet(precBits), to, precBits);
+    }
+
+    /**
+     * The state at the start's point, as midpoints and one weighted error ({@link CarriedState}),
+     * ready for {@link #walk}.
+     *
+     * @throws ExprException when a normalization constant cannot be evaluated
+     * @throws SingularCrossingException when the start's point is a singular point
+     */
+    public static CarriedState begin(Start start, int precBits) throws ExprException {
+        Equation eq = start.equation().reduced();
+        checkPath(eq, start.equation(), start.point(), start.point());
+        return CarriedState.of(eq, start.point(), start.jet(precBits));
+    }
+
+    /**
+     * Rigorous: balls containing y and y' at every point {@code center + t}, t in the ball
+     * {@code t}, from balls containing them at the exact {@code center}: one series step with a
+     * ball as its length (METHODS §2, the tail bound over the whole ball), for points that are
+     * not rational, such as Chebyshev nodes.
+     *
+     * @throws LocalSeries.StepTooLongException when |t| is too long for a tail bound
+     */
+    public static Jet stepOver(Equation equation, Rational center, Jet atCenter, Ball t, int precBits) {
+        return LocalSeries.sum(new Recurrence(equation, center), atCenter.value(), atCenter.derivative(), t,
+                StepChooser.chooseMaxTerms(precBits), precBits).jet();
     }
 
     /** The state at the target and the work done. */

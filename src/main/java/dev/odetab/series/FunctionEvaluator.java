@@ -21,16 +21,13 @@ import java.util.concurrent.ConcurrentHashMap;
 /**
  * Values of a {@link FunctionDef} at exact points, as enclosures or correctly rounded decimals.
  *
- * <p>Trust level: Rigorous. The normalization constants are evaluated to balls
- * ({@link dev.odetab.expr.ConstExpr#evaluate}), then continued from the normalization point to
- * x along the real line ({@link Continuation}); every returned ball contains the exact value.
+ * <p>Trust level: Rigorous. The normalization becomes balls at its point ({@link Start}), then
+ * is continued from there to x along the real line ({@link Continuation}); every returned ball
+ * contains the exact value.
  * {@link #digits} adds Ziv's precision loop ({@link PrecisionLoop}): a decimal is returned only
  * when every point of the enclosure rounds to it.
  */
 public final class FunctionEvaluator {
-    /** Extra bits for the normalization constants, so that they do not dominate the radius. */
-    private static final int CONSTANT_GUARD_BITS = 16;
-
     /** Degree bound for the search for polynomial solutions. */
     private static final int MAX_POLYNOMIAL_DEGREE = 4096;
     private static final Map<FunctionDef, Optional<Poly>> POLYNOMIALS = new ConcurrentHashMap<>();
@@ -84,32 +81,8 @@ public final class FunctionEvaluator {
             Jet exact = new Jet(Ball.of(poly.get().evaluate(x), precBits), Ball.of(poly.get().derivative().evaluate(x), precBits));
             return new Enclosure(exact, precBits, 0, 0);
         }
-        Jet start = constants(f, precBits);
-        Continuation.Result r = Continuation.evaluate(f.equation(), f.at(), start, x, precBits);
+        Continuation.Result r = Continuation.evaluate(Start.of(f), x, precBits);
         return new Enclosure(r.jet(), precBits, r.steps(), r.terms());
-    }
-
-    private record ConstantsKey(FunctionDef f, int precBits) {
-    }
-
-    private static final Map<ConstantsKey, Jet> CONSTANTS = new ConcurrentHashMap<>();
-
-    /**
-     * Balls containing the normalization constants y(at) and y'(at), evaluated once per function
-     * and precision (they are pure functions of both; gamma at 200 bits costs milliseconds).
-     */
-    private static Jet constants(FunctionDef f, int precBits) throws ExprException {
-        ConstantsKey key = new ConstantsKey(f, precBits);
-        Jet known = CONSTANTS.get(key);
-        if (known != null) {
-            return known;
-        }
-        Jet start = new Jet(f.value().evaluate(precBits + CONSTANT_GUARD_BITS), f.slope().evaluate(precBits + CONSTANT_GUARD_BITS));
-        if (CONSTANTS.size() > 4096) {
-            CONSTANTS.clear();
-        }
-        CONSTANTS.put(key, start);
-        return start;
     }
 
     /** A correctly rounded table entry and the work it took. */

@@ -31,7 +31,9 @@ public final class GridWalk {
             }
             return List.of(result);
         }
-        Jet start = FunctionEvaluator.enclose(f, f.at(), precBits).jet();
+        Start begin = Start.of(f);
+        CarriedState origin = Continuation.begin(begin, precBits);
+        Jet start = begin.jet(precBits);
         List<Integer> up = new ArrayList<>();
         List<Integer> down = new ArrayList<>();
         for (int i = 0; i < points.size(); i++) {
@@ -40,7 +42,7 @@ public final class GridWalk {
         up.sort((a, b) -> points.get(a).compareTo(points.get(b)));
         down.sort((a, b) -> points.get(b).compareTo(points.get(a)));
         for (List<Integer> leg : List.of(up, down)) {
-            CarriedState state = CarriedState.of(f.equation().reduced(), f.at(), start);
+            CarriedState state = origin;
             for (int i : leg) {
                 Rational x = points.get(i);
                 if (!x.equals(state.x())) {
