@@ -44,6 +44,11 @@ public abstract sealed class LocalExpansion {
         return new Series(reduced, center, state, precBits);
     }
 
+    /** The series of a non-polynomial solution at the state's point, summed from the state's balls. */
+    public static LocalExpansion series(Equation reduced, CarriedState state, int precBits) {
+        return new Series(reduced, state.jet(), state, precBits);
+    }
+
     /** The exact polynomial solution {@code p}, expanded at {@code center}. */
     public static LocalExpansion polynomial(Poly p, Rational center, int precBits) {
         return new Polynomial(p, center, precBits);

@@ -13,12 +13,12 @@ import dev.odetab.numeric.Precision;
 import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.Rounding;
 import dev.odetab.ode.FunctionDef;
+import dev.odetab.series.Continuation;
 import dev.odetab.series.FunctionEvaluator;
 import dev.odetab.series.GridWalk;
 import dev.odetab.series.Jet;
 import dev.odetab.series.LocalSeries;
 import dev.odetab.series.Recurrence;
-import dev.odetab.series.StepChooser;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;
@@ -333,8 +333,7 @@ public final class TableEvaluator {
     /** The jet at an irrational node from the jet at the rational center near it: one series step with a ball step. */
     private static Jet nodeJet(FunctionDef f, Rational center, Jet atCenter, Ball node, int precBits) {
         Ball t = node.subtract(Ball.of(center, precBits + 20), precBits + 20);
-        return LocalSeries.sum(new Recurrence(f.equation(), center), atCenter.value(), atCenter.derivative(), t,
-                StepChooser.chooseMaxTerms(precBits), precBits).jet();
+        return Continuation.stepOver(f.equation(), center, atCenter, t, precBits);
     }
 
     private static Rational factorial(int k) {

@@ -11,13 +11,15 @@ import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.Rounding;
 import dev.odetab.ode.Equation;
 import dev.odetab.ode.FunctionDef;
+import dev.odetab.series.CarriedState;
 import dev.odetab.series.Continuation;
 import dev.odetab.series.FunctionEvaluator;
 import dev.odetab.series.Jet;
 import dev.odetab.series.LocalSeries;
 import dev.odetab.series.PrecisionCapException;
+import dev.odetab.series.Start;
+import dev.odetab.series.StepChooser;
 import java.math.BigDecimal;
-import java.math.BigInteger;
 import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
@@ -217,34 +219,22 @@ final class ZeroFinder {
     }
 
     /**
-     * The expansion at x at the given precision: the normalization state, carried to x by
-     * series steps of the local cell width ({@link LocalExpansion#shift}, whose error bound does
-     * not suffer the wrapping effect); exact for polynomials.
+     * The expansion at x at the given precision: the normalization state, carried to x by the
+     * walker in steps of the local cell width ({@link Continuation#walk} with
+     * {@link StepChooser.Use#ZERO_CELL}, whose error bound does not suffer the wrapping effect);
+     * exact for polynomials.
      */
     private LocalExpansion expansionAt(Rational x, int bits) throws ExprException {
         if (poly != null) {
             return LocalExpansion.polynomial(poly, x, bits);
         }
-        Continuation.checkPath(reduced, f.equation(), f.at(), x);
-        LocalExpansion e = LocalExpansion.series(reduced, f.at(), FunctionEvaluator.enclose(f, f.at(), bits).jet(), bits);
-        Rational h = powerOfTwoBelow(e.cellWidthEstimate());
-        while (!e.center().equals(x)) {
-            Rational remaining = x.subtract(e.center());
-            Rational step = remaining.abs().compareTo(h) <= 0 ? remaining : remaining.signum() > 0 ? h : h.negate();
-            try {
-                e = e.shift(step);
-                h = powerOfTwoBelow(e.cellWidthEstimate());
-            } catch (LocalSeries.StepTooLongException tooLong) {
-                h = h.divide(Rational.TWO);
-            }
+        Start start = Start.of(f);
+        Continuation.checkPath(reduced, f.equation(), start.point(), x);
+        if (x.equals(start.point())) {
+            return LocalExpansion.series(reduced, x, start.jet(bits), bits);
         }
-        return e;
-    }
-
-    /** The largest power of two not above {@code width} (a positive heuristic width). */
-    private static Rational powerOfTwoBelow(double width) {
-        int e = Math.getExponent(Math.max(Math.min(width, 0x1p60), Double.MIN_NORMAL));
-        return e >= 0 ? Rational.of(BigInteger.ONE.shiftLeft(e)) : Rational.of(BigInteger.ONE, BigInteger.ONE.shiftLeft(-e));
+        CarriedState origin = Continuation.begin(start, bits);
+        return LocalExpansion.series(reduced, Continuation.walk(f.equation(), origin, x, bits, StepChooser.Use.ZERO_CELL).state(), bits);
     }
 
     /**
@@ -272,7 +262,7 @@ final class ZeroFinder {
         double target = poly != null
                 ? Math.abs(search.to().subtract(search.from()).doubleEstimate()) / (4.0 * (poly.degree() + 1))
                 : here.cellWidthEstimate();
-        Rational h = powerOfTwoBelow(target);
+        Rational h = StepChooser.powerOfTwoBelow(target);
         Rational remaining = search.to().subtract(a);
         Rational b = remaining.abs().compareTo(h) <= 0 ? search.to() : a.add(direction > 0 ? h : h.negate());
         Rational at = f.at();
