@@ -280,7 +280,7 @@ public final class BallFunctions {
         return e.round(wp);
     }
 
-    // ------------------------------------------------------------------ log
+    // ------------------------------------------------------------------ cos
 
     /**
      * Rigorous: a ball containing cos(x) for every x in the ball, for |x| &lt;= 8 (enough for
@@ -326,6 +326,8 @@ public final class BallFunctions {
             }
         }
     }
+
+    // ------------------------------------------------------------------ log
 
     /**
      * Trust level: Rigorous. Encloses ln x for every x in the ball; relative radius about

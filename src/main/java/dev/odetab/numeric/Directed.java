@@ -45,10 +45,6 @@ public final class Directed {
         return a.divide(b, Precision.RADIUS_UP);
     }
 
-    public static BigDecimal divDown(BigDecimal a, BigDecimal b) {
-        return a.divide(b, Precision.RADIUS_DOWN);
-    }
-
     /** a^k rounded up, for a &gt;= 0 (each factor is rounded up, so the product only grows). */
     public static BigDecimal powUp(BigDecimal a, int k) {
         BigDecimal r = BigDecimal.ONE;
@@ -61,23 +57,6 @@ public final class Directed {
             e >>= 1;
             if (e > 0) {
                 base = mulUp(base, base);
-            }
-        }
-        return r;
-    }
-
-    /** a^k rounded down, for a &gt;= 0. */
-    public static BigDecimal powDown(BigDecimal a, int k) {
-        BigDecimal r = BigDecimal.ONE;
-        BigDecimal base = a;
-        int e = k;
-        while (e > 0) {
-            if ((e & 1) != 0) {
-                r = mulDown(r, base);
-            }
-            e >>= 1;
-            if (e > 0) {
-                base = mulDown(base, base);
             }
         }
         return r;
