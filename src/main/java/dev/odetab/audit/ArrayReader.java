@@ -103,7 +103,7 @@ final class ArrayReader {
                     throw at(display, t, e.getMessage());
                 }
             } else if (t.kind() == 'i' && (INFINITY.contains(t.text()) || NEGATIVE_INFINITY.contains(t.text()))) {
-                if (!(format instanceof Format.BinaryFormat)) {
+                if (format.kind() != Format.Kind.BINARY) {
                     throw at(display, t, t.text() + " is not a value of " + format.name());
                 }
                 item = new Entries.Item(t.text(), t.line(), t.column(), null, negative != NEGATIVE_INFINITY.contains(t.text()));

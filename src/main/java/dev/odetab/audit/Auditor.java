@@ -158,15 +158,23 @@ public final class Auditor {
      * the same exponent. Not defined for fixed point (false), zeros or infinities.
      */
     private static boolean wrongExponent(Format f, Rational v, Rational mid, Entries.Item item, boolean entryZero) {
-        if (f instanceof Format.FixedFormat || entryZero || item.infinite() || mid.isZero()) {
+        if (entryZero || item.infinite() || mid.isZero()) {
             return false;
         }
-        if (f instanceof Format.DecimalFormat) {
-            int e = Ulp.floorLog10(mid.abs());
-            int ev = Ulp.floorLog10(v.abs());
-            return ev != e && !(ev == e + 1 && v.abs().equals(Rational.of(10).pow(e + 1)));
-        }
-        int emin = f instanceof Format.BinaryFormat b ? b.emin() : -1022;
+        return switch (f.kind()) {
+            case FIXED -> false;
+            case DECIMAL -> wrongDecimalExponent(v, mid);
+            case BINARY, DOUBLE_DOUBLE -> wrongBinaryExponent(v, mid, f.normalEmin().getAsInt());
+        };
+    }
+
+    private static boolean wrongDecimalExponent(Rational v, Rational mid) {
+        int e = Ulp.floorLog10(mid.abs());
+        int ev = Ulp.floorLog10(v.abs());
+        return ev != e && !(ev == e + 1 && v.abs().equals(Rational.of(10).pow(e + 1)));
+    }
+
+    private static boolean wrongBinaryExponent(Rational v, Rational mid, int emin) {
         int e = Math.max(Ulp.floorLog2(mid.abs()), emin);
         int ev = Math.max(Ulp.floorLog2(v.abs()), emin);
         return ev != e && !(ev == e + 1 && v.abs().equals(Rational.TWO.pow(e + 1)));

@@ -64,7 +64,7 @@ final class CsvReader {
         Map<Rational, Integer> heldGrid = new HashMap<>();
         for (int i = grid.size() - 1; i >= 0; i--) {
             exactGrid.put(grid.get(i), i);
-            Rational h = format instanceof Format.BinaryFormat b ? Held.held(grid.get(i), b) : grid.get(i);
+            Rational h = format.kind() == Format.Kind.BINARY ? Held.held(grid.get(i), (Format.BinaryFormat) format) : grid.get(i);
             if (h != null) {
                 heldGrid.put(h, i);
             }
@@ -74,7 +74,7 @@ final class CsvReader {
             String lineText = line >= 1 && line <= raw.length ? raw[line - 1] : "";
             items.add(field(display, rows.get(r), valueCol, line, lineText, format, hex || decoded));
             if (xs != null) {
-                int c = xHex >= 0 && format instanceof Format.BinaryFormat ? xHex : xCol;
+                int c = xHex >= 0 && format.kind() == Format.Kind.BINARY ? xHex : xCol;
                 String xText = cell(rows.get(r), c);
                 Integer index = null;
                 try {
@@ -101,7 +101,7 @@ final class CsvReader {
     /** Exact: the index of the value column ({@code NAME_hex} preferred in binary formats). */
     private static int chooseColumn(String display, List<String> header, String column, Format format) throws InputError {
         int hexCol = header.indexOf(column + "_hex");
-        if (hexCol >= 0 && format instanceof Format.BinaryFormat && !column.endsWith("_hex")) {
+        if (hexCol >= 0 && format.kind() == Format.Kind.BINARY && !column.endsWith("_hex")) {
             return hexCol;
         }
         int c = header.indexOf(column);
@@ -131,7 +131,7 @@ final class CsvReader {
             throw new InputError(where, "NaN is not allowed in a table of values");
         }
         if (lower.equals("infinity") || lower.equals("inf")) {
-            if (!(format instanceof Format.BinaryFormat)) {
+            if (format.kind() != Format.Kind.BINARY) {
                 throw new InputError(where, s + " is not a value of " + format.name());
             }
             return new Entries.Item(s, line, column(lineText, c), null, negative);
@@ -140,13 +140,14 @@ final class CsvReader {
         if (lit == null || body.matches(".*[fFdDlLuU]$") && !body.matches("(?i)0x[0-9a-f]+")) {
             throw new InputError(where, "'" + s + "' is not a number");
         }
-        if (exact && format instanceof Format.FixedFormat f) {
+        if (exact && format.kind() == Format.Kind.FIXED) {
+            Format.FixedFormat f = (Format.FixedFormat) format;
             Rational k = lit.value().multiply(Rational.TWO.pow(f.fractionBits()));
             if (!k.isInteger()) {
                 throw new InputError(where, "'" + s + "' is not a multiple of 2^-" + f.fractionBits());
             }
             lit = new Literal(k, Literal.Type.INTEGER);
-        } else if (!(format instanceof Format.FixedFormat)) {
+        } else if (format.kind() != Format.Kind.FIXED) {
             lit = new Literal(lit.value(), Literal.Type.TEXT);
         }
         try {

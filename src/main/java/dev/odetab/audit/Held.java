@@ -40,35 +40,43 @@ final class Held {
     static Entries.Item of(String text, int line, int column, Literal lit, boolean negative, Format format,
             boolean arrayEntry) throws NotHeld {
         Rational v = negative ? lit.value().negate() : lit.value();
-        if (format instanceof Format.FixedFormat f) {
-            if (lit.type() != Literal.Type.INTEGER) {
-                throw new NotHeld("a " + f.name() + " table holds stored integers, not '" + text + "'");
-            }
-            BigInteger k = v.numerator();
-            if (f.signed() && k.signum() >= 0 && k.compareTo(f.maxInteger()) > 0
-                    && k.bitLength() <= f.totalBits()) {
-                k = k.subtract(BigInteger.ONE.shiftLeft(f.totalBits()));
-            }
-            if (k.compareTo(f.minInteger()) < 0 || k.compareTo(f.maxInteger()) > 0) {
-                throw new NotHeld("'" + text + "' does not fit in " + f.name());
-            }
-            return new Entries.Item(text, line, column, Rational.of(k).multiply(Rational.TWO.pow(-f.fractionBits())), negative);
+        return switch (format.kind()) {
+            case FIXED -> fixed(text, line, column, lit, negative, v, (Format.FixedFormat) format);
+            case BINARY -> binary(text, line, column, lit, negative, v, (Format.BinaryFormat) format, arrayEntry);
+            case DOUBLE_DOUBLE, DECIMAL -> new Entries.Item(text, line, column, v, negative);
+        };
+    }
+
+    private static Entries.Item fixed(String text, int line, int column, Literal lit, boolean negative, Rational v,
+            Format.FixedFormat f) throws NotHeld {
+        if (lit.type() != Literal.Type.INTEGER) {
+            throw new NotHeld("a " + f.name() + " table holds stored integers, not '" + text + "'");
         }
-        if (format instanceof Format.BinaryFormat b) {
-            if (arrayEntry && b.equals(Format.BinaryFormat.BINARY16) && lit.type() == Literal.Type.INTEGER) {
-                return binary16(text, line, column, v);
-            }
-            Rational typed = switch (lit.type()) {
-                case FLOAT -> held(v, Format.BinaryFormat.BINARY32);
-                case DOUBLE -> held(v, Format.BinaryFormat.BINARY64);
-                default -> v;
-            };
-            if (typed == null) {
-                return new Entries.Item(text, line, column, null, negative);
-            }
-            return new Entries.Item(text, line, column, held(typed, b), negative);
+        BigInteger k = v.numerator();
+        if (f.signed() && k.signum() >= 0 && k.compareTo(f.maxInteger()) > 0
+                && k.bitLength() <= f.totalBits()) {
+            k = k.subtract(BigInteger.ONE.shiftLeft(f.totalBits()));
         }
-        return new Entries.Item(text, line, column, v, negative);
+        if (k.compareTo(f.minInteger()) < 0 || k.compareTo(f.maxInteger()) > 0) {
+            throw new NotHeld("'" + text + "' does not fit in " + f.name());
+        }
+        return new Entries.Item(text, line, column, Rational.of(k).multiply(Rational.TWO.pow(-f.fractionBits())), negative);
+    }
+
+    private static Entries.Item binary(String text, int line, int column, Literal lit, boolean negative, Rational v,
+            Format.BinaryFormat b, boolean arrayEntry) throws NotHeld {
+        if (arrayEntry && b.equals(Format.BinaryFormat.BINARY16) && lit.type() == Literal.Type.INTEGER) {
+            return binary16(text, line, column, v);
+        }
+        Rational typed = switch (lit.type()) {
+            case FLOAT -> held(v, Format.BinaryFormat.BINARY32);
+            case DOUBLE -> held(v, Format.BinaryFormat.BINARY64);
+            default -> v;
+        };
+        if (typed == null) {
+            return new Entries.Item(text, line, column, null, negative);
+        }
+        return new Entries.Item(text, line, column, held(typed, b), negative);
     }
 
     /** Exact: v rounded to nearest-even in a binary format; null when that overflows to infinity. */

@@ -26,18 +26,18 @@ final class Ulp {
 
     /** Exact: ulp of the format at x, as defined above. */
     static Rational of(Format f, Rational x) {
-        if (f instanceof Format.BinaryFormat b) {
-            int q = x.isZero() ? b.emin() : Math.max(floorLog2(x.abs()), b.emin());
-            return Rational.TWO.pow(q - b.precisionBits() + 1);
-        }
-        if (f instanceof Format.DoubleDouble) {
-            int q = x.isZero() ? -1074 : Math.max(floorLog2(x.abs()) - 105, -1074);
-            return Rational.TWO.pow(q);
-        }
-        if (f instanceof Format.DecimalFormat d) {
-            return x.isZero() ? Rational.ONE : Rational.of(10).pow(floorLog10(x.abs()) - d.digits() + 1);
-        }
-        return Rational.TWO.pow(-((Format.FixedFormat) f).fractionBits());
+        return switch (f.kind()) {
+            case BINARY -> binary(x, (Format.BinaryFormat) f);
+            case DOUBLE_DOUBLE -> Rational.TWO.pow(x.isZero() ? -1074 : Math.max(floorLog2(x.abs()) - 105, -1074));
+            case DECIMAL -> x.isZero() ? Rational.ONE
+                    : Rational.of(10).pow(floorLog10(x.abs()) - ((Format.DecimalFormat) f).digits() + 1);
+            case FIXED -> Rational.TWO.pow(-((Format.FixedFormat) f).fractionBits());
+        };
+    }
+
+    private static Rational binary(Rational x, Format.BinaryFormat b) {
+        int q = x.isZero() ? b.emin() : Math.max(floorLog2(x.abs()), b.emin());
+        return Rational.TWO.pow(q - b.precisionBits() + 1);
     }
 
     /** Exact: floor(log2 x) for x &gt; 0. */

@@ -5,6 +5,8 @@ import com.univocity.parsers.csv.CsvWriter;
 import com.univocity.parsers.csv.CsvWriterSettings;
 import dev.odetab.numeric.Entry;
 import dev.odetab.numeric.Format;
+import dev.odetab.numeric.OutOfRange;
+import dev.odetab.numeric.RoundingMode;
 import dev.odetab.tables.Column;
 import dev.odetab.base.Progress;
 import dev.odetab.tables.TableResult;
@@ -33,7 +35,7 @@ final class CsvOutput {
         Format f = result.table().format();
         List<Column> cols = result.table().columns();
         List<String> header = new ArrayList<>();
-        boolean flags = f instanceof Format.FixedFormat && result.table().outOfRange() == dev.odetab.numeric.OutOfRange.SATURATE;
+        boolean flags = f.hasOutOfRangePolicy() && result.table().outOfRange() == OutOfRange.SATURATE;
         for (Column c : cols) {
             header.addAll(Literals.csvHeader(c.name(), f, flags && !c.isPoint()));
         }
@@ -109,7 +111,7 @@ final class CsvOutput {
      * formats, nearest-even); otherwise the x column is written like every other column.
      */
     private static boolean writesExactPoint(TableResult result) {
-        return result.table().format() instanceof Format.BinaryFormat
-                && result.table().rounding() == dev.odetab.numeric.RoundingMode.NEAREST_EVEN;
+        return result.table().format().kind() == Format.Kind.BINARY
+                && result.table().rounding() == RoundingMode.NEAREST_EVEN;
     }
 }

@@ -21,44 +21,71 @@ final class Literals {
     }
 
     static List<Part> parts(Format f) {
-        if (f instanceof Format.BinaryFormat b) {
-            return switch (b.name()) {
-                case "binary16" -> List.of(new Part("", "uint16_t", "short", "binary16 encodings (IEEE 754-2019 3.4)"));
-                case "binary32" -> List.of(new Part("", "float", "float", "binary32"));
-                case "binary64" -> List.of(new Part("", "double", "double", "binary64"));
-                default -> List.of(new Part("_bits_hi", "uint64_t", "long", "binary128 encoding, high 64 bits"),
-                        new Part("_bits_lo", "uint64_t", "long", "binary128 encoding, low 64 bits"));
-            };
-        }
-        if (f instanceof Format.DoubleDouble) {
-            return List.of(new Part("_hi", "double", "double", "double-double head (binary64)"),
+        return switch (f.kind()) {
+            case BINARY -> binaryParts((Format.BinaryFormat) f);
+            case DOUBLE_DOUBLE -> List.of(new Part("_hi", "double", "double", "double-double head (binary64)"),
                     new Part("_lo", "double", "double", "double-double tail (binary64)"));
-        }
-        if (f instanceof Format.DecimalFormat d) {
-            return List.of(new Part("", "char *const", "String", "decimal, " + d.digits() + " significant digits"));
-        }
-        Format.FixedFormat x = (Format.FixedFormat) f;
+            case DECIMAL -> List.of(new Part("", "char *const", "String",
+                    "decimal, " + ((Format.DecimalFormat) f).digits() + " significant digits"));
+            case FIXED -> fixedParts((Format.FixedFormat) f);
+        };
+    }
+
+    private static List<Part> binaryParts(Format.BinaryFormat b) {
+        return switch (standard(b)) {
+            case BINARY16 -> List.of(new Part("", "uint16_t", "short", "binary16 encodings (IEEE 754-2019 3.4)"));
+            case BINARY32 -> List.of(new Part("", "float", "float", "binary32"));
+            case BINARY64 -> List.of(new Part("", "double", "double", "binary64"));
+            case BINARY128 -> List.of(new Part("_bits_hi", "uint64_t", "long", "binary128 encoding, high 64 bits"),
+                    new Part("_bits_lo", "uint64_t", "long", "binary128 encoding, low 64 bits"));
+        };
+    }
+
+    private static List<Part> fixedParts(Format.FixedFormat x) {
         return List.of(new Part("", fixedCType(x), fixedJavaType(x), x.name() + ": value = integer / 2^" + x.fractionBits()));
+    }
+
+    /** The binary formats that C and Java outputs spell, one type each. */
+    private enum Standard {
+        BINARY16(Format.BinaryFormat.BINARY16), BINARY32(Format.BinaryFormat.BINARY32),
+        BINARY64(Format.BinaryFormat.BINARY64), BINARY128(Format.BinaryFormat.BINARY128);
+
+        private final Format.BinaryFormat format;
+
+        Standard(Format.BinaryFormat format) {
+            this.format = format;
+        }
+    }
+
+    /**
+     * Which standard binary format {@code b} is. Any other binary format is a programming
+     * error, named here rather than written with another format's spelling.
+     */
+    private static Standard standard(Format.BinaryFormat b) {
+        for (Standard s : Standard.values()) {
+            if (s.format.equals(b)) {
+                return s;
+            }
+        }
+        throw new IllegalArgumentException("no C or Java spelling for the binary format " + b.name());
     }
 
     /** The C99 literal of part {@code part} of an entry. */
     static String c(Entry e, int part) {
-        Format f = e.format();
-        if (f instanceof Format.BinaryFormat b) {
-            return switch (b.name()) {
-                case "binary16" -> String.format("0x%04x", e.bits().intValue());
-                case "binary32" -> e.hexLiteral() + "f";
-                case "binary64" -> e.hexLiteral();
-                default -> hex64(part == 0 ? e.bits().shiftRight(64) : e.bits()) + "u";
+        return switch (e.format().kind()) {
+            case BINARY -> switch (standard((Format.BinaryFormat) e.format())) {
+                case BINARY16 -> String.format("0x%04x", e.bits().intValue());
+                case BINARY32 -> e.hexLiteral() + "f";
+                case BINARY64 -> e.hexLiteral();
+                case BINARY128 -> hex64(part == 0 ? e.bits().shiftRight(64) : e.bits()) + "u";
             };
-        }
-        if (f instanceof Format.DoubleDouble) {
-            return (part == 0 ? e.hi() : e.lo()).hexLiteral();
-        }
-        if (f instanceof Format.DecimalFormat) {
-            return "\"" + e.decimalText() + "\"";
-        }
-        Format.FixedFormat x = (Format.FixedFormat) f;
+            case DOUBLE_DOUBLE -> (part == 0 ? e.hi() : e.lo()).hexLiteral();
+            case DECIMAL -> "\"" + e.decimalText() + "\"";
+            case FIXED -> cFixed(e, (Format.FixedFormat) e.format());
+        };
+    }
+
+    private static String cFixed(Entry e, Format.FixedFormat x) {
         BigInteger k = e.fixedInteger();
         String suffix = (x.signed() ? "" : "u") + (x.totalBits() > 32 ? "LL" : "");
         if (x.signed() && x.totalBits() >= 32 && k.equals(BigInteger.ONE.shiftLeft(x.totalBits() - 1).negate())) {
@@ -70,22 +97,20 @@ final class Literals {
 
     /** The Java literal of part {@code part} of an entry. */
     static String java(Entry e, int part) {
-        Format f = e.format();
-        if (f instanceof Format.BinaryFormat b) {
-            return switch (b.name()) {
-                case "binary16" -> "(short) " + String.format("0x%04x", e.bits().intValue());
-                case "binary32" -> javaFloat(e.hexLiteral(), "f");
-                case "binary64" -> javaFloat(e.hexLiteral(), "");
-                default -> hex64(part == 0 ? e.bits().shiftRight(64) : e.bits()) + "L";
+        return switch (e.format().kind()) {
+            case BINARY -> switch (standard((Format.BinaryFormat) e.format())) {
+                case BINARY16 -> "(short) " + String.format("0x%04x", e.bits().intValue());
+                case BINARY32 -> javaFloat(e.hexLiteral(), "f");
+                case BINARY64 -> javaFloat(e.hexLiteral(), "");
+                case BINARY128 -> hex64(part == 0 ? e.bits().shiftRight(64) : e.bits()) + "L";
             };
-        }
-        if (f instanceof Format.DoubleDouble) {
-            return javaFloat((part == 0 ? e.hi() : e.lo()).hexLiteral(), "");
-        }
-        if (f instanceof Format.DecimalFormat) {
-            return "\"" + e.decimalText() + "\"";
-        }
-        Format.FixedFormat x = (Format.FixedFormat) f;
+            case DOUBLE_DOUBLE -> javaFloat((part == 0 ? e.hi() : e.lo()).hexLiteral(), "");
+            case DECIMAL -> "\"" + e.decimalText() + "\"";
+            case FIXED -> javaFixed(e, (Format.FixedFormat) e.format());
+        };
+    }
+
+    private static String javaFixed(Entry e, Format.FixedFormat x) {
         BigInteger k = e.fixedInteger();
         String type = fixedJavaType(x);
         if (type.equals("long")) {
@@ -133,19 +158,13 @@ final class Literals {
 
     /** The CSV cells of an entry: the value and its companion cell (hex or decoded), per DESIGN.md "Outputs". */
     static List<String> csv(Entry e) {
-        Format f = e.format();
-        if (f instanceof Format.BinaryFormat) {
-            return List.of(e.shortestDecimal(), e.hexLiteral());
-        }
-        if (f instanceof Format.DoubleDouble) {
-            String sum = e.kind() == Entry.Kind.INFINITE ? e.hi().shortestDecimal()
-                    : e.value().toDecimalOrFraction();
-            return List.of(sum, e.hi().hexLiteral(), e.lo().hexLiteral());
-        }
-        if (f instanceof Format.DecimalFormat) {
-            return List.of(e.decimalText());
-        }
-        return List.of(e.fixedInteger().toString(), e.decimalText());
+        return switch (e.format().kind()) {
+            case BINARY -> List.of(e.shortestDecimal(), e.hexLiteral());
+            case DOUBLE_DOUBLE -> List.of(e.kind() == Entry.Kind.INFINITE ? e.hi().shortestDecimal() : e.value().toDecimalOrFraction(),
+                    e.hi().hexLiteral(), e.lo().hexLiteral());
+            case DECIMAL -> List.of(e.decimalText());
+            case FIXED -> List.of(e.fixedInteger().toString(), e.decimalText());
+        };
     }
 
     /** The CSV header cells of a column, with the saturation flag column when asked. */
@@ -155,15 +174,11 @@ final class Literals {
 
     /** The CSV header cells of a column. */
     static List<String> csvHeader(String name, Format f) {
-        if (f instanceof Format.BinaryFormat) {
-            return List.of(name, name + "_hex");
-        }
-        if (f instanceof Format.DoubleDouble) {
-            return List.of(name, name + "_hi_hex", name + "_lo_hex");
-        }
-        if (f instanceof Format.DecimalFormat) {
-            return List.of(name);
-        }
-        return List.of(name, name + "_decoded");
+        return switch (f.kind()) {
+            case BINARY -> List.of(name, name + "_hex");
+            case DOUBLE_DOUBLE -> List.of(name, name + "_hi_hex", name + "_lo_hex");
+            case DECIMAL -> List.of(name);
+            case FIXED -> List.of(name, name + "_decoded");
+        };
     }
 }

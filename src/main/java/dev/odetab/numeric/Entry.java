@@ -2,7 +2,6 @@ package dev.odetab.numeric;
 
 import dev.odetab.numeric.Format.BinaryFormat;
 import dev.odetab.numeric.Format.DecimalFormat;
-import dev.odetab.numeric.Format.DoubleDouble;
 import dev.odetab.numeric.Format.FixedFormat;
 import java.math.BigDecimal;
 import java.math.BigInteger;
@@ -46,7 +45,7 @@ public record Entry(Format format, Kind kind, boolean negative, Rational value, 
         if ((value == null) != (kind == Kind.INFINITE)) {
             throw new IllegalArgumentException("value must be null exactly for an infinite entry: " + kind);
         }
-        if ((hi != null || lo != null) != (format instanceof DoubleDouble) || (hi == null) != (lo == null)) {
+        if ((hi != null || lo != null) != (format.kind() == Format.Kind.DOUBLE_DOUBLE) || (hi == null) != (lo == null)) {
             throw new IllegalArgumentException("hi and lo belong to double-double entries only");
         }
     }
@@ -300,10 +299,10 @@ public record Entry(Format format, Kind kind, boolean negative, Rational value, 
      * @throws IllegalStateException when the format is not fixed point
      */
     public BigInteger fixedInteger() {
-        if (!(format instanceof FixedFormat f)) {
+        if (format.kind() != Format.Kind.FIXED) {
             throw wrongFormat("fixedInteger()");
         }
-        return value.multiply(Rational.TWO.pow(f.fractionBits())).numerator();
+        return value.multiply(Rational.TWO.pow(((FixedFormat) format).fractionBits())).numerator();
     }
 
     /**
@@ -315,20 +314,18 @@ public record Entry(Format format, Kind kind, boolean negative, Rational value, 
      * @throws IllegalStateException for binary and double-double formats
      */
     public String decimalText() {
-        if (format instanceof DecimalFormat d) {
-            return DecimalDigits.format(value.toBigDecimal(MathContext.UNLIMITED), d.digits());
-        }
-        if (format instanceof FixedFormat) {
-            return value.toDecimalOrFraction();
-        }
-        throw wrongFormat("decimalText()");
+        return switch (format.kind()) {
+            case DECIMAL -> DecimalDigits.format(value.toBigDecimal(MathContext.UNLIMITED), ((DecimalFormat) format).digits());
+            case FIXED -> value.toDecimalOrFraction();
+            case BINARY, DOUBLE_DOUBLE -> throw wrongFormat("decimalText()");
+        };
     }
 
     private BinaryFormat binary(String what) {
-        if (format instanceof BinaryFormat f) {
-            return f;
+        if (format.kind() != Format.Kind.BINARY) {
+            throw wrongFormat(what);
         }
-        throw wrongFormat(what);
+        return (BinaryFormat) format;
     }
 
     private IllegalStateException wrongFormat(String what) {

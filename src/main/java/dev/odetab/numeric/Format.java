@@ -2,6 +2,7 @@ package dev.odetab.numeric;
 
 import java.math.BigInteger;
 import java.util.Locale;
+import java.util.OptionalInt;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -10,8 +11,26 @@ import java.util.regex.Pattern;
  *
  * <p>Every format has one canonical spelling, {@link #name()}, which {@link #parse} accepts
  * and which round-trips: {@code Format.parse(f.name()).equals(f)}.
+ *
+ * <p>A format owns its behaviour. Properties every caller needs are methods of this interface,
+ * which each record must implement; code outside {@code numeric} that treats the formats
+ * differently switches over {@link #kind()} in a switch <em>expression</em> without
+ * {@code default}, so that a new format is one new record and one new {@link Kind} constant,
+ * and the compiler lists every place that must handle it (STYLE.md, habit 8).
  */
 public sealed interface Format {
+    /** One constant per record of this interface. */
+    enum Kind {
+        /** {@link BinaryFormat}. */
+        BINARY,
+        /** {@link DoubleDouble}. */
+        DOUBLE_DOUBLE,
+        /** {@link DecimalFormat}. */
+        DECIMAL,
+        /** {@link FixedFormat}. */
+        FIXED
+    }
+
     /** All spellings {@link #parse} accepts, for messages. */
     String SPELLINGS = "binary16, binary32, binary64, binary128, double-double, "
             + "decimal:N (1 <= N <= " + 10_000 + "), fixed:sT.F or fixed:uT.F "
@@ -19,6 +38,31 @@ public sealed interface Format {
 
     /** The canonical spelling, exactly as {@link #parse} accepts it. */
     String name();
+
+    /** Which record this is, for exhaustive switches outside {@code numeric}. */
+    Kind kind();
+
+    /**
+     * Exact: the significant bits an entry holds (p for binary formats, 107 for double-double,
+     * the bits of N decimal digits for {@code decimal:N}, T for fixed point). Precision loops
+     * start from it (a heuristic choice); it never sets a radius.
+     */
+    int significantBits();
+
+    /**
+     * Exact: the exponent of the smallest positive normal number, 2^emin (IEEE 754-2019 §3.3),
+     * binary64's for double-double; empty for decimal and fixed point, which have no normal
+     * range to leave (no underflow).
+     */
+    OptionalInt normalEmin();
+
+    /**
+     * Exact: whether values beyond the format's range follow an {@link OutOfRange} policy:
+     * true for fixed point (a bounded integer range); false for binary formats and
+     * double-double, which overflow to infinity or the largest finite value by IEEE 754-2019
+     * §7.4, and for decimal, whose exponent is unbounded.
+     */
+    boolean hasOutOfRangePolicy();
 
     /**
      * Exact: the format spelled {@code text} (surrounding blanks ignored, otherwise exact:
@@ -107,6 +151,26 @@ public sealed interface Format {
             return 1 - emax;
         }
 
+        @Override
+        public Kind kind() {
+            return Kind.BINARY;
+        }
+
+        @Override
+        public int significantBits() {
+            return precisionBits;
+        }
+
+        @Override
+        public OptionalInt normalEmin() {
+            return OptionalInt.of(emin());
+        }
+
+        @Override
+        public boolean hasOutOfRangePolicy() {
+            return false;
+        }
+
         /** The exponent field width w: emax = 2^(w−1) − 1. */
         public int exponentFieldBits() {
             return Integer.numberOfTrailingZeros(emax + 1) + 1;
@@ -142,6 +206,27 @@ public sealed interface Format {
         public String name() {
             return NAME;
         }
+
+        @Override
+        public Kind kind() {
+            return Kind.DOUBLE_DOUBLE;
+        }
+
+        /** 53 + 53 + 1: the sign of lo gives one more bit. */
+        @Override
+        public int significantBits() {
+            return 107;
+        }
+
+        @Override
+        public OptionalInt normalEmin() {
+            return BinaryFormat.BINARY64.normalEmin();
+        }
+
+        @Override
+        public boolean hasOutOfRangePolicy() {
+            return false;
+        }
     }
 
     /**
@@ -161,6 +246,26 @@ public sealed interface Format {
         @Override
         public String name() {
             return "decimal:" + digits;
+        }
+
+        @Override
+        public Kind kind() {
+            return Kind.DECIMAL;
+        }
+
+        @Override
+        public int significantBits() {
+            return Precision.bitsForDigits(digits);
+        }
+
+        @Override
+        public OptionalInt normalEmin() {
+            return OptionalInt.empty();
+        }
+
+        @Override
+        public boolean hasOutOfRangePolicy() {
+            return false;
         }
     }
 
@@ -191,6 +296,26 @@ public sealed interface Format {
         @Override
         public String name() {
             return "fixed:" + (signed ? "s" : "u") + totalBits + "." + fractionBits;
+        }
+
+        @Override
+        public Kind kind() {
+            return Kind.FIXED;
+        }
+
+        @Override
+        public int significantBits() {
+            return totalBits;
+        }
+
+        @Override
+        public OptionalInt normalEmin() {
+            return OptionalInt.empty();
+        }
+
+        @Override
+        public boolean hasOutOfRangePolicy() {
+            return true;
         }
 
         /** The smallest stored integer: −2^(T−1) signed, 0 unsigned. */

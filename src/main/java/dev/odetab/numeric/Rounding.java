@@ -64,16 +64,12 @@ public final class Rounding {
         Objects.requireNonNull(exact, "exact");
         Objects.requireNonNull(m, "rounding mode");
         Objects.requireNonNull(f, "format");
-        if (f instanceof BinaryFormat b) {
-            return roundBinary(exact, b, m);
-        }
-        if (f instanceof DecimalFormat d) {
-            return roundDecimal(exact, d, m);
-        }
-        if (f instanceof FixedFormat x) {
-            return roundFixed(exact, x, m, Objects.requireNonNull(policy, "out-of-range policy"));
-        }
-        return roundDoubleDouble(exact, m);
+        return switch (f.kind()) {
+            case BINARY -> roundBinary(exact, (BinaryFormat) f, m);
+            case DOUBLE_DOUBLE -> roundDoubleDouble(exact, m);
+            case DECIMAL -> roundDecimal(exact, (DecimalFormat) f, m);
+            case FIXED -> roundFixed(exact, (FixedFormat) f, m, Objects.requireNonNull(policy, "out-of-range policy"));
+        };
     }
 
     /**

@@ -112,16 +112,7 @@ public final class FunctionEvaluator {
 
     /** The bits a format holds: where the precision loop starts (a heuristic). */
     public static int neededBits(Format f) {
-        if (f instanceof Format.BinaryFormat b) {
-            return b.precisionBits();
-        }
-        if (f instanceof Format.DoubleDouble) {
-            return 107;
-        }
-        if (f instanceof Format.DecimalFormat d) {
-            return Precision.bitsForDigits(d.digits());
-        }
-        return ((Format.FixedFormat) f).totalBits();
+        return f.significantBits();
     }
 
     /**

@@ -50,7 +50,7 @@ final class SpecQuadrature {
                 throw spec.error(key, "weight_underflow must be \"error\" (a weight below the smallest normal number stops the build) "
                         + "or \"flush\" (it becomes 0, flagged in the column weight_flag)");
             }
-            if (!(format instanceof Format.BinaryFormat) && !(format instanceof Format.DoubleDouble)) {
+            if (format.normalEmin().isEmpty()) {
                 throw spec.error(key, "weight_underflow applies to binary formats and double-double (which have a smallest normal number), "
                         + "and this table's format is " + format.name());
             }

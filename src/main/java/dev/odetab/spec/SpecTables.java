@@ -134,7 +134,7 @@ final class SpecTables {
         OutOfRange outOfRange = OutOfRange.ERROR;
         if (t.contains("out_of_range")) {
             String text = string(base, t, "out_of_range");
-            if (!(format instanceof Format.FixedFormat)) {
+            if (!format.hasOutOfRangePolicy()) {
                 throw spec.error(child(base, "out_of_range"), "out_of_range applies to fixed-point formats only, and this table's format is " + format.name());
             }
             switch (text) {
@@ -418,7 +418,11 @@ final class SpecTables {
      */
     private static long javaEntries(Grid grid, List<Column> columns, Format format) {
         long rows = grid instanceof Grid.ZeroSearch z ? z.count() : grid.size();
-        int arrays = format instanceof Format.DoubleDouble || format.equals(Format.BinaryFormat.BINARY128) ? 2 : 1;
+        int arrays = switch (format.kind()) {
+            case DOUBLE_DOUBLE -> 2;
+            case BINARY -> format.equals(Format.BinaryFormat.BINARY128) ? 2 : 1;
+            case DECIMAL, FIXED -> 1;
+        };
         return rows * columns.size() * arrays;
     }
 

@@ -57,7 +57,7 @@ final class FastTier {
                 return false;
             }
         }
-        return TableEvaluator.startBits(t.format()) - 40 <= 64;
+        return t.format().significantBits() <= 64;
     }
 
     /**

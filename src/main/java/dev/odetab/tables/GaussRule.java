@@ -260,14 +260,10 @@ final class GaussRule {
 
     /** Exact: the entry is subnormal or zero in a binary format (binary64 thresholds for double-double). */
     static boolean underflows(Entry e, Format f) {
-        int emin;
-        if (f instanceof Format.BinaryFormat b) {
-            emin = b.emin();
-        } else if (f instanceof Format.DoubleDouble) {
-            emin = Format.BinaryFormat.BINARY64.emin();
-        } else {
+        if (f.normalEmin().isEmpty()) {
             return false;
         }
+        int emin = f.normalEmin().getAsInt();
         return e.kind() == Entry.Kind.ZERO || e.kind() == Entry.Kind.FINITE && e.value().abs().compareTo(Rational.TWO.pow(emin)) < 0;
     }
 

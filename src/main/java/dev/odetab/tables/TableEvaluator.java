@@ -9,7 +9,6 @@ import dev.odetab.expr.Poly;
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.Entry;
 import dev.odetab.numeric.Format;
-import dev.odetab.numeric.Precision;
 import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.Rounding;
 import dev.odetab.ode.FunctionDef;
@@ -383,19 +382,7 @@ public final class TableEvaluator {
 
     /** The bits the format holds, plus guard bits: where the precision loop starts. */
     static int startBits(Format f) {
-        int bits;
-        if (f instanceof Format.BinaryFormat b) {
-            bits = b.precisionBits();
-        } else if (f instanceof Format.DoubleDouble) {
-            bits = 107;
-        } else if (f instanceof Format.DecimalFormat d) {
-            bits = Precision.bitsForDigits(d.digits());
-        } else if (f instanceof Format.FixedFormat x) {
-            bits = x.totalBits();
-        } else {
-            bits = 64;
-        }
-        return bits + 40;
+        return f.significantBits() + 40;
     }
 
     static Entry checked(TableDef t, Rational x, Column col, Entry e) throws OutOfRangeException {

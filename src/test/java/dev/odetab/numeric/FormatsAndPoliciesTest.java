@@ -21,6 +21,30 @@ class FormatsAndPoliciesTest {
     private static final Rational LSB15 = Rational.of(1, 1 << 15);
 
     @Test
+    void eachFormatStatesItsKindBitsNormalRangeAndPolicy() {
+        // p of IEEE 754-2019 table 3.5; 107 bits of double-double (53 + 53 and the sign of lo);
+        // emin = 1 - emax (§3.3), binary64's for double-double; decimal and fixed point never underflow
+        assertEquals(Format.Kind.BINARY, BinaryFormat.BINARY16.kind());
+        assertEquals(11, BinaryFormat.BINARY16.significantBits());
+        assertEquals(-14, BinaryFormat.BINARY16.normalEmin().getAsInt());
+        assertEquals(113, BinaryFormat.BINARY128.significantBits());
+        assertEquals(-16382, BinaryFormat.BINARY128.normalEmin().getAsInt());
+        assertEquals(Format.Kind.DOUBLE_DOUBLE, DoubleDouble.INSTANCE.kind());
+        assertEquals(107, DoubleDouble.INSTANCE.significantBits());
+        assertEquals(-1022, DoubleDouble.INSTANCE.normalEmin().getAsInt());
+        DecimalFormat d40 = new DecimalFormat(40);
+        assertEquals(Format.Kind.DECIMAL, d40.kind());
+        assertTrue(d40.significantBits() >= 133, "2^133 > 10^40, so 40 digits need at least 133 bits");
+        assertTrue(d40.normalEmin().isEmpty());
+        assertEquals(Format.Kind.FIXED, S16_15.kind());
+        assertEquals(16, S16_15.significantBits());
+        assertTrue(S16_15.normalEmin().isEmpty());
+        assertTrue(S16_15.hasOutOfRangePolicy());
+        assertFalse(BinaryFormat.BINARY64.hasOutOfRangePolicy() || DoubleDouble.INSTANCE.hasOutOfRangePolicy()
+                || d40.hasOutOfRangePolicy());
+    }
+
+    @Test
     void spellingsRoundTripAndBadOnesNameTheFormats() {
         for (String s : new String[] {"binary16", "binary32", "binary64", "binary128", "double-double",
                 "decimal:1", "decimal:10000", "fixed:s16.15", "fixed:u32.24", "fixed:s2.0", "fixed:u1.0", "fixed:s64.128"}) {
