@@ -26,7 +26,8 @@ import picocli.CommandLine.Parameters;
 /** {@code odetab eval FUNCTION X...}: one line per point, the point as given, a tab, the value. */
 @Command(name = "eval", mixinStandardHelpOptions = true,
         description = {"Print the value (or the derivative) of a function at exact points, correctly rounded.",
-            "X is an exact decimal (-7.25, 1e-3) or rational (1/3); it never goes through a binary double."})
+            "X is an exact decimal (-7.25, 1e-3), a C99 hex float (0x1p-2, the x_hex column of a CSV) or a rational (1/3);",
+            "it never goes through a binary double."})
 final class EvalCommand implements Callable<Integer> {
     static final int DEFAULT_CAP_BITS = 8192;
     static final int MAX_CAP_BITS = 1 << 20;
@@ -37,7 +38,7 @@ final class EvalCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "FUNCTION", description = "a built-in family (airy-ai, ...) or SPEC#NAME")
     String function;
 
-    @Parameters(index = "1..*", arity = "1..*", paramLabel = "X", description = "exact points")
+    @Parameters(index = "1..*", arity = "1..*", paramLabel = "X", description = "exact points: decimals, hex floats or rationals")
     List<String> points = new ArrayList<>();
 
     @Mixin

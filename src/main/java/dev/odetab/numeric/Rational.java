@@ -3,6 +3,8 @@ package dev.odetab.numeric;
 import java.math.BigDecimal;
 import java.math.BigInteger;
 import java.math.MathContext;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 
 /**
  * Exact rational number p/q with q &gt; 0 and gcd(p, q) = 1.
@@ -119,31 +121,84 @@ public final class Rational implements Comparable<Rational> {
     }
 
     /**
-     * Parses an exact decimal ({@code -7.25}, {@code 1e-3}, {@code .5}) or a rational
-     * ({@code 1/3}, {@code -2/7}). Never goes through a binary double.
+     * The largest power of ten (or, in a hex float, of two, counted in decimal digits) a parsed
+     * point may carry: 10^±100000 is far beyond every format (binary128 ends near 10^±4966),
+     * and larger exponents would make numbers too long to compute with.
+     */
+    public static final int MAX_DECIMAL_EXPONENT = 100_000;
+
+    /**
+     * Parses an exact decimal ({@code -7.25}, {@code 1e-3}, {@code .5}), a C99 hexadecimal
+     * floating literal ({@code 0x1p-2}, {@code -0x1.8p+1}: the exact value that every CSV's
+     * {@code _hex} column carries) or a rational of two of them ({@code 1/3}, {@code -2/7}).
+     * Never goes through a binary double.
      *
-     * @throws NumberFormatException with a message naming what is wrong
+     * @throws NumberFormatException with a message naming what is wrong (also for an exponent
+     *     beyond {@link #MAX_DECIMAL_EXPONENT})
      */
     public static Rational parse(String text) {
         String s = text.strip();
         int slash = s.indexOf('/');
         if (slash >= 0) {
-            Rational p = parseDecimal(s.substring(0, slash), text);
-            Rational q = parseDecimal(s.substring(slash + 1), text);
+            Rational p = parseNumber(s.substring(0, slash), text);
+            Rational q = parseNumber(s.substring(slash + 1), text);
             if (q.signum() == 0) {
                 throw new NumberFormatException("'" + text + "' divides by zero");
             }
             return p.divide(q);
         }
-        return parseDecimal(s, text);
+        return parseNumber(s, text);
     }
 
-    private static Rational parseDecimal(String s, String whole) {
-        if (s.isEmpty() || !s.matches("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?")) {
-            throw new NumberFormatException("'" + whole + "' is not an exact decimal or rational (like -7.25, 1e-3 or 1/3)");
+    private static Rational parseNumber(String s, String whole) {
+        Matcher hex = HEX_FLOAT.matcher(s);
+        if (hex.matches()) {
+            return parseHex(hex, whole);
         }
-        BigDecimal d = new BigDecimal(s);
+        if (s.isEmpty() || !s.matches("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?")) {
+            throw new NumberFormatException("'" + whole + "' is not an exact decimal, hex float or rational (like -7.25, 1e-3, 0x1p-2 or 1/3)");
+        }
+        BigDecimal d;
+        try {
+            d = new BigDecimal(s);
+        } catch (NumberFormatException e) {
+            throw exponentTooLarge(whole);
+        }
+        if (Math.abs((long) d.scale()) > MAX_DECIMAL_EXPONENT) {
+            throw exponentTooLarge(whole);
+        }
         return of(d);
+    }
+
+    /** C99 6.4.4.2: sign, 0x, hex digits with an optional point, and a binary exponent (required). */
+    private static final Pattern HEX_FLOAT =
+            Pattern.compile("([+-]?)0[xX]([0-9a-fA-F]*)(?:\\.([0-9a-fA-F]*))?[pP]([+-]?\\d+)");
+
+    /** Exact: digits·16^-f·2^e, the value C99 gives the literal before it rounds it to a type. */
+    private static Rational parseHex(Matcher m, String whole) {
+        String intDigits = m.group(2);
+        String fracDigits = m.group(3) == null ? "" : m.group(3);
+        if (intDigits.isEmpty() && fracDigits.isEmpty()) {
+            throw new NumberFormatException("'" + whole + "' has no hex digits");
+        }
+        String exp = m.group(4);
+        // |e| at most MAX_DECIMAL_EXPONENT·log2(10) < 4·MAX_DECIMAL_EXPONENT, checked before parsing as an int
+        long maxBinary = 4L * MAX_DECIMAL_EXPONENT;
+        String expDigits = exp.replaceFirst("^[+-]", "").replaceFirst("^0+(?=\\d)", "");
+        if (expDigits.length() > 9 || Long.parseLong(expDigits) + 4L * fracDigits.length() > maxBinary) {
+            throw exponentTooLarge(whole);
+        }
+        BigInteger significand = new BigInteger(intDigits + fracDigits, 16);
+        if (m.group(1).equals("-")) {
+            significand = significand.negate();
+        }
+        long e2 = Long.parseLong(exp) - 4L * fracDigits.length();
+        return e2 >= 0 ? of(significand.shiftLeft((int) e2), BigInteger.ONE) : of(significand, BigInteger.ONE.shiftLeft((int) -e2));
+    }
+
+    private static NumberFormatException exponentTooLarge(String whole) {
+        return new NumberFormatException("'" + whole + "' has an exponent beyond what odetab computes with (at most 10^±"
+                + MAX_DECIMAL_EXPONENT + ", or the same range in a hex float)");
     }
 
     public BigInteger numerator() {

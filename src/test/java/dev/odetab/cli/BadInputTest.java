@@ -75,7 +75,7 @@ class BadInputTest {
 
     @Test
     void malformedPoint() {
-        expect("argument 3 '1/3x', column 1: '1/3x' is not an exact decimal or rational (like -7.25, 1e-3 or 1/3)",
+        expect("argument 3 '1/3x', column 1: '1/3x' is not an exact decimal, hex float or rational (like -7.25, 1e-3, 0x1p-2 or 1/3)",
                 "eval", "airy-ai", "1/3x");
     }
 
@@ -84,5 +84,16 @@ class BadInputTest {
         expect("argument 4 '3000', column 1: --digits 3000 needs at least 9999 bits of working precision, "
                 + "above the precision cap of 8192 bits (raise it with --precision-cap-bits)",
                 "eval", "airy-ai", "--digits", "3000", "1");
+    }
+
+    @Test
+    void pointWithAHugeExponentIsBadInputNamingTheArgument() {
+        // was an internal error (exit 70): BigInteger would overflow supported range
+        expect("argument 3 '1e999999999', column 1: '1e999999999' has an exponent beyond what odetab computes with "
+                + "(at most 10^±100000, or the same range in a hex float)", "eval", "airy-ai", "1e999999999");
+        expect("argument 3 '0x1p999999999', column 1: '0x1p999999999' has an exponent beyond what odetab computes with "
+                + "(at most 10^±100000, or the same range in a hex float)", "eval", "airy-ai", "0x1p999999999");
+        expect("argument 3 '1e99999999999', column 1: '1e99999999999' has an exponent beyond what odetab computes with "
+                + "(at most 10^±100000, or the same range in a hex float)", "eval", "airy-ai", "1e99999999999");
     }
 }

@@ -49,4 +49,28 @@ class EvalFormatTest {
         assertEquals("5\t127\n", s.out());
         assertTrue(s.err().contains("saturated"), s.err());
     }
+
+    @Test
+    void hexFloatPointsAreExact() {
+        // 0x1p-2 = 1/4 and -0x1.8p+1 = -3 exactly (C99 6.4.4.2); the point is echoed as given
+        CliRunner.Result hex = CliRunner.run("eval", "airy-ai", "0x1p-2", "-0x1.8p+1", "0x.8P1", "--digits", "30");
+        CliRunner.Result dec = CliRunner.run("eval", "airy-ai", "0.25", "-3", "1", "--digits", "30");
+        assertEquals(0, hex.code(), hex.err());
+        assertEquals(0, dec.code(), dec.err());
+        assertEquals("0x1p-2\t0.291163954348545206272107194187\n-0x1.8p+1\t-0.378814293677658074347243916500\n"
+                + "0x.8P1\t0.135292416312881415524147423515\n", hex.out());
+        assertEquals(dec.out().replaceAll("(?m)^[^\t]*\t", ""), hex.out().replaceAll("(?m)^[^\t]*\t", ""));
+    }
+
+    @Test
+    void hexFloatOfACsvRowReadsBackToItsEntry() {
+        // x_hex of a binary64 grid point (1/3 rounded to binary64) is that double exactly: the
+        // entry at it equals the entry at the same double's exact decimal expansion
+        String xHex = "0x1.5555555555555p-2";
+        String xDecimal = new BigDecimal(Double.parseDouble(xHex)).toPlainString();
+        CliRunner.Result a = CliRunner.run("eval", "airy-ai", xHex, "--format", "binary64");
+        CliRunner.Result b = CliRunner.run("eval", "airy-ai", xDecimal, "--format", "binary64");
+        assertEquals(0, a.code(), a.err());
+        assertEquals(b.out().split("\t")[1], a.out().split("\t")[1]);
+    }
 }
