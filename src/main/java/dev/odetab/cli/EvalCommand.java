@@ -114,23 +114,13 @@ final class EvalCommand implements Callable<Integer> {
     private Integer printEntries(FunctionDef f, List<Rational> xs, PrintWriter out, PrintWriter err)
             throws InputError, ExprException, PointLimit {
         Format fmt;
-        RoundingMode mode;
-        OutOfRange policy;
         try {
             fmt = Format.parse(format);
         } catch (IllegalArgumentException e) {
             throw new InputError(optionWhere("--format"), e.getMessage());
         }
-        try {
-            mode = RoundingMode.parse(rounding);
-        } catch (IllegalArgumentException e) {
-            throw new InputError(optionWhere("--rounding"), e.getMessage());
-        }
-        switch (outOfRange) {
-            case "error" -> policy = OutOfRange.ERROR;
-            case "saturate" -> policy = OutOfRange.SATURATE;
-            default -> throw new InputError(optionWhere("--out-of-range"), "expected error or saturate, got '" + outOfRange + "'");
-        }
+        RoundingMode mode = roundingMode();
+        OutOfRange policy = outOfRangePolicy();
         for (int i = 0; i < xs.size(); i++) {
             FunctionEvaluator.Decided r;
             try {
@@ -166,7 +156,30 @@ final class EvalCommand implements Callable<Integer> {
         }
     }
 
+    private RoundingMode roundingMode() throws InputError {
+        try {
+            return RoundingMode.parse(rounding);
+        } catch (IllegalArgumentException e) {
+            throw new InputError(optionWhere("--rounding"), e.getMessage());
+        }
+    }
+
+    private OutOfRange outOfRangePolicy() throws InputError {
+        return switch (outOfRange) {
+            case "error" -> OutOfRange.ERROR;
+            case "saturate" -> OutOfRange.SATURATE;
+            default -> throw new InputError(optionWhere("--out-of-range"), "expected error or saturate, got '" + outOfRange + "'");
+        };
+    }
+
     private void checkOptions() throws InputError {
+        roundingMode();
+        outOfRangePolicy();
+        for (String option : List.of("--rounding", "--out-of-range")) {
+            if (format == null && spec.commandLine().getParseResult().hasMatchedOption(option)) {
+                throw new InputError(optionWhere(option), option + " applies only with --format (--digits rounds to nearest, ties to even)");
+            }
+        }
         if (capBits < 64 || capBits > MAX_CAP_BITS) {
             throw new InputError(optionWhere("--precision-cap-bits"),
                     "the precision cap must lie between 64 and " + MAX_CAP_BITS + " bits, got " + capBits);

@@ -96,4 +96,14 @@ class BadInputTest {
         expect("argument 3 '1e99999999999', column 1: '1e99999999999' has an exponent beyond what odetab computes with "
                 + "(at most 10^±100000, or the same range in a hex float)", "eval", "airy-ai", "1e99999999999");
     }
+
+    @Test
+    void roundingAndOutOfRangeAreCheckedWithoutAFormat() {
+        expect("argument 5 'bogus', column 1: unknown rounding mode 'bogus'; expected one of " + dev.odetab.numeric.RoundingMode.validSpellings(),
+                "eval", "airy-ai", "1", "--rounding", "bogus");
+        expect("argument 5 'saturate', column 1: --out-of-range applies only with --format (--digits rounds to nearest, ties to even)",
+                "eval", "airy-ai", "1", "--out-of-range", "saturate");
+        expect("argument 5 'bogus', column 1: expected error or saturate, got 'bogus'",
+                "eval", "airy-ai", "1", "--out-of-range", "bogus");
+    }
 }
