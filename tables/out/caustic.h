@@ -6,7 +6,7 @@
  * equation:      y'' - x*y = 0
  * normalization: y(0) = 1/(3^(2/3)*gamma(2/3)), y'(0) = -1/(3^(1/3)*gamma(1/3)) [defined in tables/quillmere.toml]
  * grid:          from -8 to 4 step 0.03125 (385 points)
- * format:        binary64, rounding nearest-even
+ * format:        binary64, rounding nearest-even (roundTiesToEven: the nearest entry, ties to the even one)
  * error:         largest proven relative error before rounding 2.20e-27 (enclosure radius / |value|), working precision up to 106 bits
  * Every entry is the correct rounding of the exact value, decided from a proven enclosure.
  */

@@ -6,7 +6,7 @@
  * equation:      y'' - 2*x*y' + 40*y = 0
  * normalization: y(0) = 670442572800, y'(0) = 0 [DLMF 18.3, 18.5.13, 18.8 (Table 18.8.1), 18.9.25]
  * grid:          Gauss–Hermite rule, n = 20, weight function e^(-x^2) on (-inf, inf); nodes ascending, each zero of p_20 proven by interval Newton from an exact center, all 20 counted by disjoint enclosures
- * format:        binary64, rounding nearest-even
+ * format:        binary64, rounding nearest-even (roundTiesToEven: the nearest entry, ties to the even one)
  * error:         largest proven relative error before rounding 1.99e-34 (enclosure radius / |value|), working precision up to 93 bits
  * Every entry is the correct rounding of the exact value, decided from a proven enclosure.
  */

@@ -53,7 +53,8 @@ final class EvalCommand implements Callable<Integer> {
     String format;
 
     @Option(names = "--rounding", paramLabel = "MODE", defaultValue = "nearest-even",
-            description = "with --format: nearest-even (default), down, up, toward-zero")
+            description = {"with --format: nearest-even (default, ties to even); toward-negative (never above the exact value;",
+                "alias down); toward-positive (never below it; alias up); toward-zero (never larger in magnitude)"})
     String rounding;
 
     @Option(names = "--out-of-range", paramLabel = "POLICY", defaultValue = "error",

@@ -30,7 +30,7 @@ public record Provenance(String specPath, String specSha256, String table, Strin
         }
         return new Provenance(specPath.replace('\\', '/'), Outputs.sha256(specBytes), t.name(), t.functionName() + " (" + f.name() + ")",
                 f.equation().toString(), normalization,
-                r.proof() == null ? t.grid().describe() : t.grid().describe() + "; " + r.proof(), format, t.rounding().spelling(),
+                r.proof() == null ? t.grid().describe() : t.grid().describe() + "; " + r.proof(), format, t.rounding().spelling() + " (" + t.rounding().direction() + ")",
                 maxError, toolVersion);
     }
 

@@ -13,32 +13,45 @@ import java.util.stream.Collectors;
  * an UP entry is never below it.
  */
 public enum RoundingMode {
-    NEAREST_EVEN("nearest-even"),
-    DOWN("down"),
-    UP("up"),
-    TOWARD_ZERO("toward-zero");
+    NEAREST_EVEN("nearest-even", null, "roundTiesToEven: the nearest entry, ties to the even one"),
+    DOWN("toward-negative", "down", "roundTowardNegative: never above the exact value"),
+    UP("toward-positive", "up", "roundTowardPositive: never below the exact value"),
+    TOWARD_ZERO("toward-zero", null, "roundTowardZero: never larger in magnitude than the exact value");
 
     private final String spelling;
+    private final String alias;
+    private final String direction;
 
-    RoundingMode(String spelling) {
+    RoundingMode(String spelling, String alias, String direction) {
         this.spelling = spelling;
+        this.alias = alias;
+        this.direction = direction;
     }
 
-    /** The spelling used in spec files and provenance: {@code nearest-even}, {@code down}, {@code up}, {@code toward-zero}. */
+    /**
+     * The spelling used in spec files and provenance: {@code nearest-even}, {@code toward-negative},
+     * {@code toward-positive}, {@code toward-zero} (IEEE 754-2019's attribute names, which cannot be
+     * misread as Java's {@code RoundingMode.DOWN}, toward zero).
+     */
     public String spelling() {
         return spelling;
     }
 
+    /** The IEEE 754-2019 attribute and the direction in words, for help texts and provenance. */
+    public String direction() {
+        return direction;
+    }
+
     /**
-     * Exact: the mode spelled {@code text} (as {@link #spelling()} writes it; case-sensitive,
-     * surrounding blanks ignored).
+     * Exact: the mode spelled {@code text} (as {@link #spelling()} writes it, or the earlier
+     * aliases {@code down} and {@code up}; case-sensitive, surrounding blanks ignored).
      *
      * @throws IllegalArgumentException naming the text and listing the valid spellings
      */
     public static RoundingMode parse(String text) {
         String s = text == null ? "" : text.strip();
         for (RoundingMode m : values()) {
-            if (m.spelling.equals(s)) {
+            if (m.spelling.equals(s) || s.equals(m.alias)) {
                 return m;
             }
         }
@@ -48,7 +61,8 @@ public enum RoundingMode {
 
     /** The valid spellings, comma-separated, for messages. */
     public static String validSpellings() {
-        return Arrays.stream(values()).map(RoundingMode::spelling).collect(Collectors.joining(", "));
+        return Arrays.stream(values()).map(RoundingMode::spelling).collect(Collectors.joining(", "))
+                + " (down and up are accepted for toward-negative and toward-positive)";
     }
 
     /**

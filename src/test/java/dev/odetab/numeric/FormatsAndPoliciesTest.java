@@ -59,7 +59,13 @@ class FormatsAndPoliciesTest {
             assertEquals(m, RoundingMode.parse(m.spelling()));
         }
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> RoundingMode.parse("nearest"));
-        assertTrue(e.getMessage().contains("nearest-even, down, up, toward-zero"), e.getMessage());
+        assertTrue(e.getMessage().contains("nearest-even, toward-negative, toward-positive, toward-zero"), e.getMessage());
+        // IEEE 754-2019's directed attributes by name; down and up stay accepted as aliases
+        assertEquals(RoundingMode.DOWN, RoundingMode.parse("toward-negative"));
+        assertEquals(RoundingMode.DOWN, RoundingMode.parse("down"));
+        assertEquals(RoundingMode.UP, RoundingMode.parse("toward-positive"));
+        assertEquals(RoundingMode.UP, RoundingMode.parse("up"));
+        assertEquals("toward-negative", RoundingMode.DOWN.spelling());
     }
 
     @Test
