@@ -85,7 +85,7 @@ final class BuildCommand implements Callable<Integer> {
                             : Outputs.forWriting(dir, ToolVersion.get(), writing)) {
                 for (int i = 0; i < work.size(); i++) {
                     Job j = work.get(i);
-                    outputs.add(results.get(i), Provenance.of(j.spec().display(), j.spec().bytes(), results.get(i), ToolVersion.get()),
+                    outputs.add(results.get(i), Provenance.of(Provenance.specPath(j.spec().path(), dir), j.spec().display(), j.spec().bytes(), results.get(i), ToolVersion.get()),
                             j.spec().title());
                 }
                 if (check) {

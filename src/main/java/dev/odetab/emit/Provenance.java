@@ -1,7 +1,9 @@
 package dev.odetab.emit;
 
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Objects;
 
 /**
  * Where a table comes from (DESIGN.md "Outputs"): the spec and its SHA-256, the table, the
@@ -11,12 +13,33 @@ import java.util.List;
 public record Provenance(String specPath, String specSha256, String table, String function, String equation,
         String normalization, String grid, String format, String rounding, String maxError, String toolVersion) {
 
-    /** The provenance of an evaluated table of the spec at {@code specPath} with content {@code specBytes}. */
-    public static Provenance of(String specPath, byte[] specBytes, dev.odetab.tables.TableResult r, String toolVersion) {
+    /**
+     * The spec's path as provenance records it: relative to the output folder, normalized and
+     * '/'-separated ({@code ../quillmere.toml} for tables/quillmere.toml built into tables/out),
+     * so the bytes depend neither on the working directory nor on how the path was typed
+     * ({@code ./tables/quillmere.toml}, an absolute path). The normalized absolute path when the
+     * two share no root (another drive).
+     */
+    public static String specPath(Path spec, Path outDir) {
+        Path s = spec.toAbsolutePath().normalize();
+        Path d = outDir.toAbsolutePath().normalize();
+        Path shown = Objects.equals(s.getRoot(), d.getRoot()) ? d.relativize(s) : s;
+        return shown.toString().replace('\\', '/');
+    }
+
+    /**
+     * The provenance of an evaluated table of the spec typed as {@code specDisplay} on the
+     * command line, recorded as {@code specPath} (what {@link #specPath} gives), with content
+     * {@code specBytes}. A function the spec defines is named by the recorded path too.
+     */
+    public static Provenance of(String specPath, String specDisplay, byte[] specBytes, dev.odetab.tables.TableResult r,
+            String toolVersion) {
         var t = r.table();
         var f = t.function();
+        String source = f.source().equals("defined in " + specDisplay) ? "defined in " + specPath : f.source();
+        String name = f.name().startsWith(specDisplay + "#") ? specPath + f.name().substring(specDisplay.length()) : f.name();
         String normalization = "y(" + f.at().toDecimalOrFraction() + ") = " + f.value() + ", y'(" + f.at().toDecimalOrFraction()
-                + ") = " + f.slope() + (f.source().isEmpty() ? "" : " [" + f.source() + "]");
+                + ") = " + f.slope() + (source.isEmpty() ? "" : " [" + source + "]");
         String maxError = r.maxRelativeRadius().signum() == 0
                 ? "none: every entry was computed exactly before rounding"
                 : "largest proven relative error before rounding " + r.maxRelativeRadius().toString().replace("E", "e")
@@ -28,7 +51,7 @@ public record Provenance(String specPath, String specSha256, String table, Strin
                     .filter(e -> e.kind() == dev.odetab.numeric.Entry.Kind.SATURATED).count();
             format += " (out of range: saturate; " + saturated + " entr" + (saturated == 1 ? "y" : "ies") + " saturated, flagged in the CSV)";
         }
-        return new Provenance(specPath.replace('\\', '/'), Outputs.sha256(specBytes), t.name(), t.functionName() + " (" + f.name() + ")",
+        return new Provenance(specPath, Outputs.sha256(specBytes), t.name(), t.functionName() + " (" + name + ")",
                 f.equation().toString(), normalization,
                 r.proof() == null ? t.grid().describe() : t.grid().describe() + "; " + r.proof(), format, t.rounding().spelling() + " (" + t.rounding().direction() + ")",
                 maxError, toolVersion);
