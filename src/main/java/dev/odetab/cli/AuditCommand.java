@@ -7,7 +7,7 @@ import dev.odetab.audit.ErrorPlot;
 import dev.odetab.audit.TableReader;
 import dev.odetab.base.ExprException;
 import dev.odetab.emit.OutputWriter;
-import dev.odetab.series.SingularCrossingException;
+import dev.odetab.ode.SingularCrossingException;
 import dev.odetab.base.InputError;
 import dev.odetab.spec.SpecFile;
 import dev.odetab.tables.Column;

@@ -3,7 +3,7 @@ package dev.odetab.cli;
 import dev.odetab.emit.Outputs;
 import dev.odetab.emit.Provenance;
 import dev.odetab.base.ExprException;
-import dev.odetab.series.SingularCrossingException;
+import dev.odetab.ode.SingularCrossingException;
 import dev.odetab.base.InputError;
 import dev.odetab.spec.SpecFile;
 import dev.odetab.tables.TableDef;

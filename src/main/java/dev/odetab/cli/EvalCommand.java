@@ -11,7 +11,7 @@ import dev.odetab.numeric.Rational;
 import dev.odetab.ode.FunctionDef;
 import dev.odetab.series.FunctionEvaluator;
 import dev.odetab.series.PrecisionCapException;
-import dev.odetab.series.SingularCrossingException;
+import dev.odetab.ode.SingularCrossingException;
 import dev.odetab.base.InputError;
 import java.io.PrintWriter;
 import java.util.ArrayList;

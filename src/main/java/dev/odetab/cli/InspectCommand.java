@@ -15,7 +15,7 @@ import dev.odetab.series.FunctionEvaluator;
 import dev.odetab.series.Jet;
 import dev.odetab.series.LocalSeries;
 import dev.odetab.series.Recurrence;
-import dev.odetab.series.SingularCrossingException;
+import dev.odetab.ode.SingularCrossingException;
 import dev.odetab.base.InputError;
 import java.io.PrintWriter;
 import java.math.BigDecimal;

@@ -1,12 +1,11 @@
 package dev.odetab.series;
 
 import dev.odetab.base.ExprException;
-import dev.odetab.expr.Poly;
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.Equation;
-import java.math.BigInteger;
-import java.math.MathContext;
+import dev.odetab.ode.RealPath;
+import dev.odetab.ode.SingularCrossingException;
 
 /**
  * Analytic continuation of a solution along the real line, by a chain of Taylor steps.
@@ -15,9 +14,9 @@ import java.math.MathContext;
  * for the state at c + h with {@link LocalSeries#sum}, whose result encloses the exact state;
  * the next step starts from those balls, so the final balls contain y and y' at the target.
  * Every center is an exact rational (from + k·2^e, then the target itself), so the shifted
- * coefficients stay exact. The path never crosses a real singular point: before stepping, the
- * real roots of the reduced P2 on the closed segment are counted exactly (Sturm), and any root
- * there is an error that names it.
+ * coefficients stay exact. The path never crosses a real singular point: before stepping, it is
+ * checked by {@link RealPath#checkPath} (exact Sturm counts), and any root there is an error
+ * that names it.
  *
  * <p>Step lengths are a heuristic choice ({@link StepChooser}, by default
  * {@link StepChooser.Use#CONTINUATION}); a step whose tail bound cannot be established is
@@ -41,7 +40,7 @@ public final class Continuation {
     public static Result evaluate(Equation equation, Rational from, Jet start, Rational to, int precBits) {
         Equation eq = equation.reduced();
         if (from.equals(to)) {
-            checkPath(eq, equation, from, to);
+            RealPath.checkPath(eq, equation, from, to);
             return new Result(start, 0, 0); // the start itself, exact zeros included
         }
         Carried r = walk(equation, CarriedState.of(eq, from, start), to, precBits);
@@ -67,7 +66,7 @@ public final class Continuation {
      */
     public static CarriedState begin(Start start, int precBits) throws ExprException {
         Equation eq = start.equation().reduced();
-        checkPath(eq, start.equation(), start.point(), start.point());
+        RealPath.checkPath(eq, start.equation(), start.point(), start.point());
         return CarriedState.of(eq, start.point(), start.jet(precBits));
     }
 
@@ -107,7 +106,7 @@ public final class Continuation {
      */
     public static Carried walk(Equation equation, CarriedState start, Rational to, int precBits, StepChooser.Use use) {
         Equation eq = equation.reduced();
-        checkPath(eq, equation, start.x(), to);
+        RealPath.checkPath(eq, equation, start.x(), to);
         CarriedState state = start;
         int steps = 0;
         int terms = 0;
@@ -129,52 +128,5 @@ public final class Continuation {
             steps++;
         }
         return new Carried(state, steps, terms);
-    }
-
-    /**
-     * Exact: throws when a real root of the reduced P2 lies on the closed segment between the
-     * two points (Sturm counts); names the root.
-     *
-     * @param reduced {@code original.reduced()}
-     * @throws SingularCrossingException when such a root exists
-     */
-    public static void checkPath(Equation reduced, Equation original, Rational from, Rational to) {
-        Poly p2 = reduced.p2();
-        Rational lo = from.min(to);
-        Rational hi = from.max(to);
-        if (p2.countRealRoots(lo, hi) == 0) {
-            return;
-        }
-        // Isolate the root nearest to `from` by bisection with exact Sturm counts.
-        Rational a = lo;
-        Rational b = hi;
-        boolean towardLow = from.equals(lo);
-        for (int i = 0; i < 64; i++) {
-            Rational m = a.add(b).divide(Rational.TWO);
-            Rational na = towardLow ? a : m;
-            Rational nb = towardLow ? m : b;
-            if (p2.countRealRoots(na, nb) > 0) {
-                a = na;
-                b = nb;
-            } else {
-                a = towardLow ? m : a;
-                b = towardLow ? b : m;
-            }
-        }
-        String where = describeRoot(p2, a, b);
-        throw new SingularCrossingException("x = " + where + " is a singular point of " + original
-                + " and lies between " + from.toDecimalOrFraction() + " and " + to.toDecimalOrFraction()
-                + "; a solution cannot be continued through it");
-    }
-
-    private static String describeRoot(Poly p2, Rational a, Rational b) {
-        Rational guess = a.add(b).divide(Rational.TWO);
-        for (int den = 1; den <= 1000; den++) {
-            Rational near = Rational.of(guess.multiply(Rational.of(den)).add(Rational.of(1, 2)).floor(), BigInteger.valueOf(den));
-            if (near.compareTo(a) >= 0 && near.compareTo(b) <= 0 && p2.evaluate(near).isZero()) {
-                return near.toDecimalOrFraction();
-            }
-        }
-        return guess.toBigDecimal(new MathContext(12)).toPlainString() + " (approximately)";
     }
 }

@@ -3,6 +3,8 @@ package dev.odetab.series;
 import dev.odetab.numeric.DDBall;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.Equation;
+import dev.odetab.ode.RealPath;
+import dev.odetab.ode.SingularCrossingException;
 
 /**
  * Enclosures of a solution on a run of equally spaced points x0, x0 + h, …, in double-double
@@ -36,7 +38,7 @@ public final class FastWalk {
         Equation reduced = equation.reduced();
         Rational last = x0.add(h.multiply(Rational.of(count - 1)));
         try {
-            Continuation.checkPath(reduced, equation, x0, last);
+            RealPath.checkPath(reduced, equation, x0, last);
         } catch (SingularCrossingException e) {
             return null;
         }

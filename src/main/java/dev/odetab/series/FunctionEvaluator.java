@@ -11,6 +11,7 @@ import dev.odetab.numeric.RoundingMode;
 import dev.odetab.numeric.Precision;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.FunctionDef;
+import dev.odetab.ode.SingularCrossingException;
 import dev.odetab.expr.Poly;
 import java.math.BigDecimal;
 import java.math.MathContext;

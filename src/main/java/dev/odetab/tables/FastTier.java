@@ -12,7 +12,7 @@ import dev.odetab.series.Continuation;
 import dev.odetab.series.FastWalk;
 import dev.odetab.series.GridWalk;
 import dev.odetab.series.Jet;
-import dev.odetab.series.SingularCrossingException;
+import dev.odetab.ode.SingularCrossingException;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;

@@ -11,6 +11,7 @@ import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.Rounding;
 import dev.odetab.ode.Equation;
 import dev.odetab.ode.FunctionDef;
+import dev.odetab.ode.RealPath;
 import dev.odetab.series.CarriedState;
 import dev.odetab.series.Continuation;
 import dev.odetab.series.FunctionEvaluator;
@@ -126,7 +127,7 @@ final class ZeroFinder {
                     + " vanishes identically, so every point is a zero; a zeros table needs isolated zeros");
         }
         if (poly == null) {
-            Continuation.checkPath(reduced, f.equation(), from, to);
+            RealPath.checkPath(reduced, f.equation(), from, to);
         }
         LocalExpansion here = start(from);
         int signBefore = endSign(here, "start");
@@ -229,7 +230,7 @@ final class ZeroFinder {
             return LocalExpansion.polynomial(poly, x, bits);
         }
         Start start = Start.of(f);
-        Continuation.checkPath(reduced, f.equation(), start.point(), x);
+        RealPath.checkPath(reduced, f.equation(), start.point(), x);
         if (x.equals(start.point())) {
             return LocalExpansion.series(reduced, x, start.jet(bits), bits);
         }

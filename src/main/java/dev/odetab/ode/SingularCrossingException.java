@@ -1,4 +1,4 @@
-package dev.odetab.series;
+package dev.odetab.ode;
 
 /** A path of continuation would cross (or end on) a real singular point of the equation. */
 public final class SingularCrossingException extends RuntimeException {
