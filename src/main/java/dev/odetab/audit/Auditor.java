@@ -4,9 +4,10 @@ import dev.odetab.base.ExprException;
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.Format;
 import dev.odetab.numeric.Rational;
-import dev.odetab.series.FunctionEvaluator;
 import dev.odetab.series.GridWalk;
 import dev.odetab.series.Jet;
+import dev.odetab.series.PrecisionCapException;
+import dev.odetab.series.PrecisionLoop;
 import dev.odetab.base.InputError;
 import dev.odetab.tables.Column;
 import dev.odetab.tables.TableDef;
@@ -24,23 +25,21 @@ import java.util.List;
  * ({@link Ulp}), (2) the enclosure is narrower than 2^−10 ulp, so the printed error is good to
  * about 1e-3 ulp, and (3) the whole error interval is on one side of the tolerance. Unsettled
  * entries are walked again at twice the precision, up to the table's precision cap; beyond it
- * the audit stops with {@link UndecidedException}, never a guess. The reported error is the
+ * the audit stops with {@link PrecisionCapException}, never a guess ({@link PrecisionLoop#runBatch}). The reported error is the
  * error at the enclosure's midpoint, with the enclosure radius in ulps as its bound.
  */
 public final class Auditor {
     /** The enclosure radius, in ulps, below which the printed error is settled: 2^−10. */
     static final Rational SETTLED_ULPS = Rational.TWO.pow(-10);
 
+    /**
+     * Guard bits of the audit's first walk (a heuristic, below {@link PrecisionLoop#GUARD_BITS}
+     * since its printed errors are taken at the midpoints of the precision reached: the committed
+     * reports stay as they are).
+     */
+    private static final int START_GUARD_BITS = 30;
+
     private Auditor() {
-    }
-
-    /** Entries whose error the precision cap cannot settle. */
-    public static final class UndecidedException extends Exception {
-        private static final long serialVersionUID = 1L;
-
-        UndecidedException(String message) {
-            super(message);
-        }
     }
 
     /**
@@ -48,10 +47,10 @@ public final class Auditor {
      *
      * @throws InputError when the table and the file do not fit (lengths, kind of grid or column)
      * @throws ExprException when a normalization constant cannot be evaluated
-     * @throws UndecidedException when the precision cap cannot settle some entries
+     * @throws PrecisionCapException when the precision cap cannot settle some entries
      */
     public static AuditResult audit(TableDef t, Column column, Entries e, double tolerance)
-            throws InputError, ExprException, UndecidedException {
+            throws InputError, ExprException, PrecisionCapException {
         if (t.grid() instanceof dev.odetab.tables.Grid.Found) {
             throw new InputError(e.source(), "table " + t.name() + " is a zeros or quadrature table, whose points are found, not given;"
                     + " audit compares entries at exact grid points (a values table)");
@@ -74,41 +73,35 @@ public final class Auditor {
         for (int i = 0; i < n; i++) {
             pending.add(i);
         }
-        int prec = FunctionEvaluator.neededBits(t.format()) + 30;
-        int maxPrec = 0;
-        while (true) {
+        int[] maxPrec = {0};
+        PrecisionLoop.runBatch(pending, (undecided, prec) -> {
             List<Rational> pts = new ArrayList<>();
-            for (int i : pending) {
+            for (int i : undecided) {
                 pts.add(grid.get(gridIndex(e, i)));
             }
             List<Jet> jets = GridWalk.enclose(t.function(), pts, prec);
             List<Integer> still = new ArrayList<>();
-            for (int k = 0; k < pending.size(); k++) {
-                int i = pending.get(k);
+            for (int k = 0; k < undecided.size(); k++) {
+                int i = undecided.get(k);
                 Ball b = column.order() == 0 ? jets.get(k).value() : jets.get(k).derivative();
                 AuditResult.Row r = measure(t.format(), i, pts.get(k), e.entries().get(i), b, tol);
                 if (r == null) {
                     still.add(i);
                 } else {
                     rows[i] = r;
-                    maxPrec = prec;
+                    maxPrec[0] = prec;
                 }
             }
-            pending = still;
-            if (pending.isEmpty()) {
-                break;
+            return still;
+        }, t.format().significantBits() + START_GUARD_BITS, t.capBits(), still -> {
+            StringBuilder sb = new StringBuilder("the precision cap of " + t.capBits() + " bits cannot settle the error of "
+                    + still.size() + " entr" + (still.size() == 1 ? "y" : "ies") + ", at x =");
+            for (int k = 0; k < Math.min(10, still.size()); k++) {
+                sb.append(' ').append(grid.get(gridIndex(e, still.get(k))).toDecimalOrFraction());
             }
-            if (prec >= t.capBits()) {
-                StringBuilder sb = new StringBuilder("the precision cap of " + t.capBits() + " bits cannot settle the error of "
-                        + pending.size() + " entr" + (pending.size() == 1 ? "y" : "ies") + ", at x =");
-                for (int k = 0; k < Math.min(10, pending.size()); k++) {
-                    sb.append(' ').append(grid.get(gridIndex(e, pending.get(k))).toDecimalOrFraction());
-                }
-                throw new UndecidedException(sb.append(" (the error may be exactly the tolerance)").toString());
-            }
-            prec = Math.min(t.capBits(), 2 * prec);
-        }
-        return new AuditResult(t, column.name(), e, List.of(rows), tolerance, maxPrec);
+            return sb.append(" (the error may be exactly the tolerance)").toString();
+        });
+        return new AuditResult(t, column.name(), e, List.of(rows), tolerance, maxPrec[0]);
     }
 
     /** Exact: the grid index entry i stands for. */

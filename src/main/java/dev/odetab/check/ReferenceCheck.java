@@ -9,7 +9,10 @@ import dev.odetab.ode.family.Catalog;
 import dev.odetab.ode.family.Family;
 import dev.odetab.ode.family.ParameterException;
 import dev.odetab.series.FunctionEvaluator;
+import dev.odetab.series.GridWalk;
 import dev.odetab.series.Jet;
+import dev.odetab.series.PrecisionCapException;
+import dev.odetab.series.PrecisionLoop;
 import java.io.IOException;
 import java.math.BigDecimal;
 import java.math.MathContext;
@@ -97,46 +100,59 @@ public final class ReferenceCheck {
             }
             sources.add(c[5]);
         }
-        List<String> failures = new ArrayList<>();
-        double worst = 0;
-        int count = 0;
+        Tally tally = new Tally();
         for (List<Row> group : groups.values()) {
             FunctionDef fn = define(group.get(0).function(), group.get(0).params(), group.get(0).where());
             int digits = group.stream().mapToInt(r -> r.value().precision()).max().orElse(20);
-            int prec = (int) Math.ceil((digits + 10) * 3.33);
-            List<Row> pending = group;
-            while (!pending.isEmpty()) {
-                List<Rational> xs = pending.stream().map(Row::x).toList();
-                List<Jet> jets;
-                try {
-                    jets = dev.odetab.series.GridWalk.enclose(fn, xs, prec);
-                } catch (ExprException e) {
-                    throw new DataError(pending.get(0).where() + ": " + e.getMessage());
-                }
-                List<Row> still = new ArrayList<>();
-                for (int i = 0; i < pending.size(); i++) {
-                    Row row = pending.get(i);
-                    Ball b = row.derivative() ? jets.get(i).derivative() : jets.get(i).value();
-                    BigDecimal unit = row.value().ulp();
-                    // judge only once the enclosure is narrower than a quarter of the reference's last digit
-                    if (b.rad().compareTo(unit.divide(BigDecimal.valueOf(4))) > 0 && prec < CAP_BITS) {
-                        still.add(row);
-                        continue;
-                    }
-                    count++;
-                    worst = Math.max(worst, b.mid().subtract(row.value()).abs().divide(unit, MathContext.DECIMAL64).doubleValue());
-                    if (!b.addError(unit.divide(BigDecimal.valueOf(2))).contains(row.value())) {
-                        failures.add(row.where() + ": " + row.function() + (row.params().isEmpty() ? "" : " (" + row.params() + ")")
-                                + (row.derivative() ? " derivative" : " value") + " at x = " + row.x().toDecimalOrFraction()
-                                + ": reference " + row.value() + " is not consistent with the enclosure " + b);
-                    }
-                }
-                pending = still;
-                prec *= 2;
+            try {
+                PrecisionLoop.runBatch(group, (pending, prec) -> judge(fn, pending, prec, tally), (int) Math.ceil((digits + 10) * 3.33),
+                        CAP_BITS, still -> "the precision cap of " + CAP_BITS + " bits cannot judge " + still.get(0).where());
+            } catch (PrecisionCapException e) {
+                throw new DataError(e.getMessage());
             }
         }
         // one source per file; where rows cite different equations of it, all are named
-        return new Outcome(f.getFileName().toString(), String.join("; ", sources), count, failures, worst);
+        return new Outcome(f.getFileName().toString(), String.join("; ", sources), tally.count, tally.failures, tally.worst);
+    }
+
+    /** What the rows judged so far found. */
+    private static final class Tally {
+        private final List<String> failures = new ArrayList<>();
+        private double worst;
+        private int count;
+    }
+
+    /**
+     * One round of the precision loop: judges the rows whose enclosure at {@code prec} is
+     * narrower than a quarter of the reference's last digit, and every row at the cap (so the
+     * cap is never left with rows); returns the others.
+     */
+    private static List<Row> judge(FunctionDef fn, List<Row> pending, int prec, Tally tally) throws DataError {
+        List<Rational> xs = pending.stream().map(Row::x).toList();
+        List<Jet> jets;
+        try {
+            jets = GridWalk.enclose(fn, xs, prec);
+        } catch (ExprException e) {
+            throw new DataError(pending.get(0).where() + ": " + e.getMessage());
+        }
+        List<Row> still = new ArrayList<>();
+        for (int i = 0; i < pending.size(); i++) {
+            Row row = pending.get(i);
+            Ball b = row.derivative() ? jets.get(i).derivative() : jets.get(i).value();
+            BigDecimal unit = row.value().ulp();
+            if (b.rad().compareTo(unit.divide(BigDecimal.valueOf(4))) > 0 && prec < CAP_BITS) {
+                still.add(row);
+                continue;
+            }
+            tally.count++;
+            tally.worst = Math.max(tally.worst, b.mid().subtract(row.value()).abs().divide(unit, MathContext.DECIMAL64).doubleValue());
+            if (!b.addError(unit.divide(BigDecimal.valueOf(2))).contains(row.value())) {
+                tally.failures.add(row.where() + ": " + row.function() + (row.params().isEmpty() ? "" : " (" + row.params() + ")")
+                        + (row.derivative() ? " derivative" : " value") + " at x = " + row.x().toDecimalOrFraction()
+                        + ": reference " + row.value() + " is not consistent with the enclosure " + b);
+            }
+        }
+        return still;
     }
 
     private static FunctionDef define(String name, String params, String where) throws DataError {

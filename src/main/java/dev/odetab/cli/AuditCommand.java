@@ -8,6 +8,7 @@ import dev.odetab.audit.TableReader;
 import dev.odetab.base.ExprException;
 import dev.odetab.emit.OutputWriter;
 import dev.odetab.ode.SingularCrossingException;
+import dev.odetab.series.PrecisionCapException;
 import dev.odetab.base.InputError;
 import dev.odetab.spec.SpecFile;
 import dev.odetab.tables.Column;
@@ -95,9 +96,8 @@ final class AuditCommand implements Callable<Integer> {
         } catch (ExprException e) {
             err.println("odetab: a normalization constant cannot be evaluated: " + e.getMessage());
             return Main.BAD_INPUT;
-        } catch (Auditor.UndecidedException e) {
-            err.println("odetab: " + e.getMessage());
-            return Main.NUMERICAL_LIMIT;
+        } catch (PrecisionCapException e) {
+            return Failures.numericalLimit("", e, "", err);
         } catch (IOException e) {
             err.println("odetab: cannot write the report: " + e.getMessage());
             return Main.BAD_INPUT;

@@ -104,9 +104,8 @@ final class EvalCommand implements Callable<Integer> {
         } catch (InputError | ExprException | SingularCrossingException e) {
             return Failures.badInput(e, function, err);
         } catch (PointLimit e) {
-            err.println("odetab: " + function + " at x = " + e.point + ": " + e.getCause().getMessage()
-                    + "; nothing is printed for this point (raise --precision-cap-bits)");
-            return Main.NUMERICAL_LIMIT;
+            return Failures.numericalLimit(function + " at x = " + e.point + ": ", (PrecisionCapException) e.getCause(),
+                    "; nothing is printed for this point (raise --precision-cap-bits)", err);
         } finally {
             out.flush();
         }

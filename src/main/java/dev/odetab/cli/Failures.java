@@ -1,9 +1,10 @@
 package dev.odetab.cli;
 
 import dev.odetab.base.ExprException;
+import dev.odetab.series.PrecisionCapException;
 import java.io.PrintWriter;
 
-/** The one-line messages of bad input shared by the commands that take a FUNCTION. */
+/** The one-line messages of bad input and of numerical limits, shared by the commands. */
 final class Failures {
     private Failures() {
     }
@@ -16,6 +17,16 @@ final class Failures {
             err.println("odetab: " + e.getMessage());
         }
         return Main.BAD_INPUT;
+    }
+
+    /**
+     * Prints the message of a precision cap that was reached ({@code context} first: the table or
+     * the point; then {@code remedy}) and returns exit code 3, the one mapping of
+     * {@link PrecisionCapException} to an exit code.
+     */
+    static int numericalLimit(String context, PrecisionCapException e, String remedy, PrintWriter err) {
+        err.println("odetab: " + context + e.getMessage() + remedy);
+        return Main.NUMERICAL_LIMIT;
     }
 
     /** The --verbose line for one point. */

@@ -102,18 +102,13 @@ public final class FunctionEvaluator {
         if (exact.isPresent()) {
             return new Decided(Rounding.round(exact.get(), format, mode, policy), 0, 0, 0, 0, true);
         }
-        int needed = neededBits(format);
+        int needed = format.significantBits();
         Enclosure[] last = new Enclosure[1];
         PrecisionLoop.Outcome<Entry> out = PrecisionLoop.<Entry, ExprException>run(prec -> {
             last[0] = enclose(f, x, prec);
             return derivative ? last[0].jet().derivative() : last[0].jet().value();
-        }, b -> Rounding.decide(b, format, mode, policy), needed, Math.min(needed + 40, capBits), capBits);
+        }, b -> Rounding.decide(b, format, mode, policy), needed, PrecisionLoop.chooseStartBits(format), capBits);
         return new Decided(out.result(), out.precBits(), out.attempts(), last[0].steps(), last[0].terms(), false);
-    }
-
-    /** The bits a format holds: where the precision loop starts (a heuristic). */
-    public static int neededBits(Format f) {
-        return f.significantBits();
     }
 
     /**

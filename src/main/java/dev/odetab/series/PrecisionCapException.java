@@ -2,12 +2,18 @@ package dev.odetab.series;
 
 import dev.odetab.numeric.Ball;
 
-/** The precision loop reached its cap without deciding the rounding; carries the last enclosure. */
+/**
+ * The one "precision cap reached" of the program: a precision loop ({@link PrecisionLoop}) could
+ * not decide what it was asked within the cap, so nothing is guessed. The command line maps it
+ * to exit code 3 in one place. The message says what stayed undecided (entries, points, zeros)
+ * and how to go on.
+ */
 public final class PrecisionCapException extends Exception {
     private static final long serialVersionUID = 1L;
     private final transient Ball lastEnclosure;
     private final int capBits;
 
+    /** A single value whose rounding the cap could not decide, with its last enclosure. */
     public PrecisionCapException(int capBits, Ball lastEnclosure) {
         super("the precision cap of " + capBits + " bits was reached before the rounding could be decided (last enclosure "
                 + lastEnclosure + ")");
@@ -15,6 +21,14 @@ public final class PrecisionCapException extends Exception {
         this.lastEnclosure = lastEnclosure;
     }
 
+    /** Anything else the cap could not decide, described by {@code message} (which names the cap). */
+    public PrecisionCapException(String message, int capBits) {
+        super(message);
+        this.capBits = capBits;
+        this.lastEnclosure = null;
+    }
+
+    /** The last enclosure of a single value; null for the other failures. */
     public Ball lastEnclosure() {
         return lastEnclosure;
     }
