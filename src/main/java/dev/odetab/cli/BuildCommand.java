@@ -6,9 +6,11 @@ import dev.odetab.base.ExprException;
 import dev.odetab.ode.SingularCrossingException;
 import dev.odetab.base.InputError;
 import dev.odetab.spec.SpecFile;
+import dev.odetab.tables.OutOfRangeException;
 import dev.odetab.tables.TableDef;
 import dev.odetab.tables.TableEvaluator;
 import dev.odetab.tables.TableResult;
+import dev.odetab.tables.UndecidedException;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;
@@ -114,13 +116,13 @@ final class BuildCommand implements Callable<Integer> {
         } catch (Outputs.ClashError e) {
             err.println("odetab: " + e.getMessage());
             return Main.BAD_INPUT;
-        } catch (TableEvaluator.OutOfRangeException | SingularCrossingException e) {
+        } catch (OutOfRangeException | SingularCrossingException e) {
             err.println("odetab: " + failedAt() + e.getMessage());
             return Main.BAD_INPUT;
         } catch (ExprException e) {
             err.println("odetab: " + failedAt() + "a normalization constant cannot be evaluated: " + e.getMessage());
             return Main.BAD_INPUT;
-        } catch (TableEvaluator.UndecidedException e) {
+        } catch (UndecidedException e) {
             err.println("odetab: " + failedAt() + e.getMessage());
             return Main.NUMERICAL_LIMIT;
         } catch (IOException e) {
@@ -145,7 +147,7 @@ final class BuildCommand implements Callable<Integer> {
      * table order (so the caller releases them even when a later table fails).
      */
     private void evaluate(List<Job> work, int n, PrintWriter err, List<TableResult> results) throws ExprException,
-            TableEvaluator.UndecidedException, TableEvaluator.OutOfRangeException {
+            UndecidedException, OutOfRangeException {
         ProgressDisplay progress = ProgressDisplay.forBuild("odetab: evaluating", "rows", quiet);
         // Tables run on one pool and the chunks of large grids on another, so that a table
         // waiting for its chunks never holds a thread that a chunk needs.

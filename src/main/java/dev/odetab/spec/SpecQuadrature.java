@@ -6,7 +6,7 @@ import dev.odetab.numeric.Format;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.FunctionDef;
 import dev.odetab.tables.Column;
-import dev.odetab.tables.GaussFamily;
+import dev.odetab.tables.quadrature.GaussFamily;
 import dev.odetab.tables.Grid;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;

@@ -6,7 +6,7 @@ package dev.odetab.tables;
  * y^(K)(x) = K! c_K), or, in a {@code taylor} table, the Taylor coefficient {@code taylorK} = c_K
  * at the point (the spec's column {@code taylor} expands to taylor0 … taylor(terms−1)); in a
  * {@code quadrature} table, the {@code node} (a point column), its {@code weight}, the
- * {@code scaled_weight} and the {@code weight_flag} of a flushed weight ({@link GaussRule}).
+ * {@code scaled_weight} and the {@code weight_flag} of a flushed weight ({@link dev.odetab.tables.quadrature.GaussRule}).
  *
  * @param name the name in the spec and in the outputs
  * @param order −1 for x, 0 for the value, K for the K-th derivative or coefficient

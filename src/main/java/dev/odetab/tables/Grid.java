@@ -1,5 +1,6 @@
 package dev.odetab.tables;
 
+import dev.odetab.tables.quadrature.GaussFamily;
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.BallFunctions;
 import dev.odetab.numeric.Rational;
@@ -226,7 +227,7 @@ public sealed interface Grid {
     /**
      * Not a grid but a search: the zeros of y (or of y' when {@code ofDerivative}) met walking
      * from {@code from} to {@code to}, at most {@code count} of them (0: all). The points are
-     * found by {@link ZeroFinder}; they are irrational in general, so the table holds each zero
+     * found by {@link dev.odetab.tables.zeros.ZeroFinder}; they are irrational in general, so the table holds each zero
      * correctly rounded.
      */
     record ZeroSearch(Rational from, Rational to, int count, boolean ofDerivative) implements Found {
@@ -239,7 +240,7 @@ public sealed interface Grid {
 
     /**
      * Not a grid but a Gauss rule: its points are the n nodes of the rule, found by
-     * {@link GaussRule}.
+     * {@link dev.odetab.tables.quadrature.GaussRule}.
      *
      * @param family the rule
      * @param flushUnderflow true when a weight below the format's smallest normal number is

@@ -1,67 +1,21 @@
 package dev.odetab.tables;
 
-import dev.odetab.tables.rows.RowStore;
-
-import dev.odetab.base.Progress;
-
 import dev.odetab.base.ExprException;
-import dev.odetab.expr.Poly;
-import dev.odetab.numeric.Ball;
-import dev.odetab.numeric.Entry;
+import dev.odetab.base.Progress;
 import dev.odetab.numeric.Format;
-import dev.odetab.numeric.Rational;
-import dev.odetab.numeric.Rounding;
-import dev.odetab.ode.FunctionDef;
-import dev.odetab.series.Continuation;
-import dev.odetab.series.FunctionEvaluator;
-import dev.odetab.series.GridWalk;
-import dev.odetab.series.Jet;
-import dev.odetab.series.LocalSeries;
-import dev.odetab.series.Recurrence;
-import java.math.BigDecimal;
-import java.math.MathContext;
-import java.util.ArrayList;
-import java.util.Arrays;
-import java.util.List;
-import java.util.Optional;
-import java.util.concurrent.Callable;
-import java.util.concurrent.CompletableFuture;
+import dev.odetab.tables.quadrature.GaussRule;
+import dev.odetab.tables.values.ValuesEvaluator;
+import dev.odetab.tables.zeros.ZeroFinder;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Future;
-import java.util.ArrayDeque;
-import java.util.Deque;
 
 /**
- * Evaluation of a values table: every entry correctly rounded from a proven enclosure.
- *
- * <p>Trust level: Rigorous. Polynomial solutions take the exact path (exact rational values,
- * rounded once, so exactly representable values and exact rounding midpoints come out right,
- * METHODS §5). Otherwise the grid is walked point to point ({@link GridWalk}) at a working
- * precision; an entry is stored only when {@link Rounding#decide} finds that every point of its
- * enclosure rounds to it (Ziv). Rows with an undecided entry are walked again at twice the
- * precision, up to the table's cap; rows still undecided there are reported, never guessed.
+ * Evaluation of a table of any kind: values tables go to {@link ValuesEvaluator}, zeros tables to
+ * {@link ZeroFinder}, quadrature tables to {@link GaussRule}.
  */
 public final class TableEvaluator {
     private TableEvaluator() {
-    }
-
-    /** Entries that the precision cap could not decide, with their points. */
-    public static final class UndecidedException extends Exception {
-        private static final long serialVersionUID = 1L;
-
-        UndecidedException(String message) {
-            super(message);
-        }
-    }
-
-    /** An entry outside the range of a fixed-point format whose policy is "error". */
-    public static final class OutOfRangeException extends Exception {
-        private static final long serialVersionUID = 1L;
-
-        OutOfRangeException(String message) {
-            super(message);
-        }
     }
 
     /**
@@ -82,10 +36,9 @@ public final class TableEvaluator {
     }
 
     /**
-     * As {@link #evaluate(TableDef)}, with the chunks of the grid evaluated on {@code pool} (null:
-     * in the calling thread) and progress reported as rows are decided. The chunks are fixed by
-     * the table alone ({@link #chunkSize}), and each chunk is a deterministic computation, so the
-     * result does not depend on the pool.
+     * As {@link #evaluate(TableDef)}, with the chunks of a values table evaluated on {@code pool}
+     * (null: in the calling thread) and progress reported as rows are decided; the result does
+     * not depend on the pool ({@link ValuesEvaluator#evaluate}).
      */
     public static TableResult evaluate(TableDef t, Progress progress, ExecutorService pool)
             throws ExprException, UndecidedException, OutOfRangeException {
@@ -102,93 +55,7 @@ public final class TableEvaluator {
             progress.advance(rule.rows().size());
             return rule;
         }
-        int n = t.grid().size();
-        progress.start(t.name(), n);
-        int size = chunkSize(t);
-        int chunks = (n + size - 1) / size;
-        List<CompletableFuture<Jet>> starts = null;
-        Thread walker = null;
-        if (FastTier.applies(t) && FunctionEvaluator.polynomial(t.function()).isEmpty()) {
-            List<CompletableFuture<Jet>> futures = new ArrayList<>();
-            for (int c = 0; c < chunks; c++) {
-                futures.add(new CompletableFuture<>());
-            }
-            starts = futures;
-            if (pool == null || chunks == 1) {
-                FastTier.chunkStarts(t, size, futures);
-            } else {
-                // The walk to the chunk starts is sequential: it runs beside the chunks, which wait only for their own start.
-                walker = new Thread(() -> FastTier.chunkStarts(t, size, futures), "odetab-chunk-starts");
-                walker.setDaemon(true);
-                walker.start();
-            }
-        }
-        List<CompletableFuture<Jet>> startList = starts;
-        RowStore store = RowStore.forTable(t);
-        BigDecimal maxRel = BigDecimal.ZERO;
-        int maxPrec = 0;
-        Deque<Future<Chunk>> window = new ArrayDeque<>();
-        int next = 0;
-        int inFlight = pool == null ? 1 : Math.max(2, Math.min(2 * Runtime.getRuntime().availableProcessors(), ROWS_IN_FLIGHT / size));
-        try {
-            while (next < chunks || !window.isEmpty()) {
-                while (next < chunks && window.size() < inFlight) {
-                    int s = next * size;
-                    int e = Math.min(n, s + size);
-                    CompletableFuture<Jet> start = startList == null ? null : startList.get(next);
-                    Callable<Chunk> task = () -> chunk(t, s, e, start == null ? null : await(start));
-                    window.add(pool == null || chunks == 1 ? completed(task) : pool.submit(task));
-                    next++;
-                }
-                Chunk c = await(window.poll());
-                for (TableResult.Row row : c.rows()) {
-                    store.append(row);
-                }
-                maxRel = maxRel.max(c.maxRel());
-                maxPrec = Math.max(maxPrec, c.maxPrec());
-                progress.advance(c.rows().length);
-            }
-        } finally {
-            for (Future<Chunk> f : window) {
-                f.cancel(true);
-            }
-            if (walker != null) {
-                walker.interrupt();
-            }
-        }
-        return new TableResult(t, store.finish(), maxRel, maxPrec);
-    }
-
-    /**
-     * Heuristic: rows per chunk, a function of the table alone (never of the number of threads),
-     * so that every build walks the same chunks. For the fast tier on a uniform grid, as many rows
-     * as span about one unit of x (its balls widen with the distance walked), at least 32 and at
-     * most 8192 (each chunk start costs a BigDecimal leg, so dense grids want long chunks);
-     * otherwise 2048 rows.
-     */
-    static int chunkSize(TableDef t) {
-        if (t.grid() instanceof Grid.Uniform u && FastTier.applies(t) && FunctionEvaluator.polynomial(t.function()).isEmpty()) {
-            double perUnit = 1 / Math.abs(u.step().doubleEstimate());
-            return (int) Math.max(32, Math.min(8192, Math.ceil(perUnit)));
-        }
-        return 2048;
-    }
-
-    /** At most this many rows are held by chunks in flight (memory does not grow with the table). */
-    private static final int ROWS_IN_FLIGHT = 16384;
-
-    /** The rows of one chunk and its statistics. */
-    private record Chunk(TableResult.Row[] rows, BigDecimal maxRel, int maxPrec) {
-    }
-
-    private static Future<Chunk> completed(Callable<Chunk> task) {
-        CompletableFuture<Chunk> f = new CompletableFuture<>();
-        try {
-            f.complete(task.call());
-        } catch (Exception | Error e) {
-            f.completeExceptionally(e);
-        }
-        return f;
+        return ValuesEvaluator.evaluate(t, progress, pool);
     }
 
     /**
@@ -222,187 +89,8 @@ public final class TableEvaluator {
         }
     }
 
-    /**
-     * Rigorous: rows s … e−1. Exact rows for polynomials at exact points; then the fast tier
-     * ({@link FastTier}) from the chunk's start when there is one; then BigDecimal walks at doubling precision for the
-     * rows still undecided, up to the cap.
-     */
-    private static Chunk chunk(TableDef t, int s, int e, Jet start) throws ExprException, UndecidedException, OutOfRangeException {
-        int len = e - s;
-        List<Column> cols = t.columns();
-        Entry[][] entries = new Entry[len][];
-        BigDecimal maxRel = BigDecimal.ZERO;
-        int maxPrec = 0;
-        Optional<Poly> poly = FunctionEvaluator.polynomial(t.function());
-        Grid grid = t.grid();
-        List<Integer> pending = new ArrayList<>();
-        List<Poly> derivatives = new ArrayList<>();
-        for (Poly p = poly.orElse(null); p != null && derivatives.size() <= Column.MAX_DERIVATIVE; p = p.derivative()) {
-            derivatives.add(p);
-        }
-        for (int i = s; i < e; i++) {
-            Rational x = poly.isPresent() ? grid.exactPoint(i) : null;
-            if (x != null) {
-                entries[i - s] = new Entry[cols.size()];
-                for (int c = 0; c < cols.size(); c++) {
-                    Column col = cols.get(c);
-                    Rational v = col.isPoint() ? x : derivatives.get(col.order()).evaluate(x);
-                    if (col.taylor()) {
-                        v = v.divide(factorial(col.order()));
-                    }
-                    entries[i - s][c] = checked(t, x, col, Rounding.round(v, t.format(), t.rounding(), t.outOfRange()));
-                }
-            } else {
-                pending.add(i);
-            }
-        }
-        if (!pending.isEmpty() && start != null) {
-            FastTier.Outcome fast = FastTier.run(t, s, e, start, entries);
-            maxRel = maxRel.max(fast.maxRel());
-            maxPrec = Math.max(maxPrec, fast.precBits());
-            pending = fast.undecided();
-        }
-        int prec = startBits(t.format());
-        while (!pending.isEmpty()) {
-            List<Rational> pts = new ArrayList<>();
-            for (int i : pending) {
-                pts.add(grid.center(i));
-            }
-            List<Jet> jets = poly.isPresent() ? null : GridWalk.enclose(t.function(), pts, prec);
-            List<Integer> still = new ArrayList<>();
-            for (int k = 0; k < pending.size(); k++) {
-                int i = pending.get(k);
-                Ball node = grid.node(i, prec);
-                Jet jet = poly.isPresent() ? polynomialJet(poly.get(), node, prec)
-                        : grid.exactPoint(i) != null ? jets.get(k) : nodeJet(t.function(), pts.get(k), jets.get(k), node, prec);
-                Entry[] row = new Entry[cols.size()];
-                BigDecimal rowRel = BigDecimal.ZERO;
-                boolean decided = true;
-                Ball[] derivs = null;
-                for (int c = 0; c < cols.size() && decided; c++) {
-                    Column col = cols.get(c);
-                    Ball b;
-                    if (col.isPoint()) {
-                        b = node;
-                    } else {
-                        if (derivs == null) {
-                            derivs = derivatives(t.function(), pts.get(k), jet, maxOrder(cols), prec);
-                        }
-                        b = col.taylor() ? derivs[col.order()].divide(factorial(col.order()), prec) : derivs[col.order()];
-                    }
-                    Optional<Entry> en = Rounding.decide(b, t.format(), t.rounding(), t.outOfRange());
-                    if (en.isEmpty()) {
-                        decided = false;
-                    } else {
-                        row[c] = en.get();
-                        rowRel = col.isPoint() ? rowRel : rowRel.max(relative(b));
-                    }
-                }
-                if (decided) {
-                    for (int c = 0; c < cols.size(); c++) {
-                        row[c] = checked(t, pts.get(k), cols.get(c), row[c]);
-                    }
-                    entries[i - s] = row;
-                    maxRel = maxRel.max(rowRel);
-                    maxPrec = Math.max(maxPrec, prec);
-                } else {
-                    still.add(i);
-                }
-            }
-            pending = still;
-            if (!pending.isEmpty()) {
-                if (prec >= t.capBits()) {
-                    throw new UndecidedException(undecidedMessage(t, pending));
-                }
-                prec = Math.min(t.capBits(), 2 * prec);
-            }
-        }
-        TableResult.Row[] rows = new TableResult.Row[len];
-        for (int i = s; i < e; i++) {
-            rows[i - s] = new TableResult.Row(grid.exactPoint(i), Arrays.asList(entries[i - s]));
-        }
-        return new Chunk(rows, maxRel, maxPrec);
-    }
-
-    /** Value and slope of an exact polynomial over a ball (Horner in ball arithmetic). */
-    private static Jet polynomialJet(Poly p, Ball x, int precBits) {
-        return new Jet(p.evaluate(x, precBits), p.derivative().evaluate(x, precBits));
-    }
-
-    /** The jet at an irrational node from the jet at the rational center near it: one series step with a ball step. */
-    private static Jet nodeJet(FunctionDef f, Rational center, Jet atCenter, Ball node, int precBits) {
-        Ball t = node.subtract(Ball.of(center, precBits + 20), precBits + 20);
-        return Continuation.stepOver(f.equation(), center, atCenter, t, precBits);
-    }
-
-    private static Rational factorial(int k) {
-        Rational f = Rational.ONE;
-        for (int i = 2; i <= k; i++) {
-            f = f.multiply(i);
-        }
-        return f;
-    }
-
-    private static int maxOrder(List<Column> cols) {
-        int m = 0;
-        for (Column c : cols) {
-            m = Math.max(m, c.order());
-        }
-        return m;
-    }
-
-    /**
-     * Enclosures of y, y', …, y^(order) at x from the jet: y^(k)(x) = k! c_k with the Taylor
-     * coefficients at x given by the recurrence (METHODS §1).
-     */
-    private static Ball[] derivatives(FunctionDef f, Rational x, Jet jet, int order, int precBits) {
-        Ball[] d = new Ball[Math.max(order, 1) + 1];
-        d[0] = jet.value();
-        d[1] = jet.derivative();
-        if (order >= 2) {
-            Ball[] c = LocalSeries.coefficients(new Recurrence(f.equation(), x), jet.value(), jet.derivative(), order + 1, precBits);
-            Rational factorial = Rational.ONE;
-            for (int k = 2; k <= order; k++) {
-                factorial = factorial.multiply(k);
-                d[k] = c[k].multiply(factorial, precBits);
-            }
-        }
-        return d;
-    }
-
-    static BigDecimal relative(Ball b) {
-        if (b.rad().signum() == 0) {
-            return BigDecimal.ZERO;
-        }
-        if (b.mid().abs().compareTo(b.rad().multiply(BigDecimal.valueOf(2))) <= 0) {
-            return b.rad();
-        }
-        return b.rad().divide(b.mid().abs().subtract(b.rad()), new MathContext(3));
-    }
-
     /** The bits the format holds, plus guard bits: where the precision loop starts. */
-    static int startBits(Format f) {
+    public static int startBits(Format f) {
         return f.significantBits() + 40;
-    }
-
-    static Entry checked(TableDef t, Rational x, Column col, Entry e) throws OutOfRangeException {
-        if (e.kind() == Entry.Kind.OUT_OF_RANGE) {
-            throw new OutOfRangeException("table " + t.name() + ": the " + col.name() + " at x = " + x.toDecimalOrFraction()
-                    + " lies outside the range of " + t.format().name()
-                    + " (out_of_range = \"error\"; choose a wider format or out_of_range = \"saturate\")");
-        }
-        return e;
-    }
-
-    private static String undecidedMessage(TableDef t, List<Integer> pending) {
-        StringBuilder sb = new StringBuilder("table " + t.name() + ": the precision cap of " + t.capBits()
-                + " bits cannot decide the rounding of " + pending.size() + " row(s), at x =");
-        for (int k = 0; k < Math.min(10, pending.size()); k++) {
-            sb.append(' ').append(t.grid().center(pending.get(k)).toDecimalOrFraction());
-        }
-        if (pending.size() > 10) {
-            sb.append(" …");
-        }
-        return sb.append(" (raise precision_cap_bits, or the value may be an exact rounding boundary)").toString();
     }
 }

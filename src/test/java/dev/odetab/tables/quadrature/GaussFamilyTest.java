@@ -1,4 +1,4 @@
-package dev.odetab.tables;
+package dev.odetab.tables.quadrature;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;

@@ -1,5 +1,10 @@
-package dev.odetab.tables;
+package dev.odetab.tables.values;
 
+import dev.odetab.tables.Column;
+import dev.odetab.tables.Grid;
+import dev.odetab.tables.TableDef;
+import dev.odetab.tables.TableEvaluator;
+import dev.odetab.tables.TableResult;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 

@@ -1,5 +1,12 @@
-package dev.odetab.tables;
+package dev.odetab.tables.quadrature;
 
+import dev.odetab.tables.Column;
+import dev.odetab.tables.Grid;
+import dev.odetab.tables.OutOfRangeException;
+import dev.odetab.tables.TableDef;
+import dev.odetab.tables.TableEvaluator;
+import dev.odetab.tables.TableResult;
+import dev.odetab.tables.UndecidedException;
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.BallFunctions;
 import dev.odetab.numeric.Entry;
@@ -47,13 +54,13 @@ import java.util.Optional;
  *
  * <p>Weights: w = K / g(x, p_n'(x)) ({@link GaussFamily}), with p_n' enclosed over X. Precision:
  * Ziv's loop per node, from the format's bits plus guard bits, doubling up to the table's cap
- * ({@link TableEvaluator.UndecidedException} beyond it).
+ * ({@link UndecidedException} beyond it).
  *
  * <p>Underflow (IEEE 754-2019 §7.5: tiny results): a weight whose correctly rounded binary entry
  * is below the smallest normal number 2^emin (subnormal or zero) is an error, or, with
  * {@code weight_underflow = "flush"}, written as +0 and flagged 1 in the {@code weight_flag} column.
  */
-final class GaussRule {
+public final class GaussRule {
     /** A center lies on a dyadic grid of spacing about 2^-CENTER_BITS times the distance to the nearest other zero or end. */
     private static final int CENTER_BITS = 10;
     private static final MathContext STEP_CONTEXT = new MathContext(24, RoundingMode.HALF_EVEN);
@@ -93,11 +100,11 @@ final class GaussRule {
     /**
      * Rigorous: the rule of {@code q} as the rows of table {@code t} (class comment).
      *
-     * @throws TableEvaluator.UndecidedException when the precision cap cannot decide a row or separate the nodes
-     * @throws TableEvaluator.OutOfRangeException when a weight underflows (policy "error") or a fixed-point entry is out of range
+     * @throws UndecidedException when the precision cap cannot decide a row or separate the nodes
+     * @throws OutOfRangeException when a weight underflows (policy "error") or a fixed-point entry is out of range
      */
-    static TableResult table(TableDef t, Grid.Quadrature q)
-            throws TableEvaluator.UndecidedException, TableEvaluator.OutOfRangeException {
+    public static TableResult table(TableDef t, Grid.Quadrature q)
+            throws UndecidedException, OutOfRangeException {
         GaussFamily f = q.family();
         int n = f.n();
         List<NodeSource> sources = new ArrayList<>();
@@ -152,7 +159,7 @@ final class GaussRule {
 
     /** Ziv's loop for one source: its row, and with {@code mirror} the row of the negated node. */
     private static Decided[] decide(TableDef t, Grid.Quadrature q, NodeSource s, boolean mirror)
-            throws TableEvaluator.UndecidedException, TableEvaluator.OutOfRangeException {
+            throws UndecidedException, OutOfRangeException {
         int prec = TableEvaluator.startBits(t.format());
         while (true) {
             try {
@@ -166,7 +173,7 @@ final class GaussRule {
                 // the loop below raises the precision
             }
             if (prec >= t.capBits()) {
-                throw new TableEvaluator.UndecidedException("table " + t.name() + ": the precision cap of " + t.capBits()
+                throw new UndecidedException("table " + t.name() + ": the precision cap of " + t.capBits()
                         + " bits cannot decide a node of the " + q.family().describe() + " near x = "
                         + approximateNode(s) + " (raise precision_cap_bits, or an entry may be an exact rounding boundary)");
             }
@@ -190,7 +197,7 @@ final class GaussRule {
 
     /** The entries of one row, or null when some enclosure is too wide to decide its entry. */
     private static Decided row(TableDef t, Grid.Quadrature q, Enclosure e, int prec)
-            throws TableEvaluator.OutOfRangeException {
+            throws OutOfRangeException {
         Format format = t.format();
         int wp = prec + 20;
         Ball node = e.nodeBall(wp);
@@ -225,7 +232,7 @@ final class GaussRule {
                 }
             }
             if (entry.kind() == Entry.Kind.OUT_OF_RANGE) {
-                throw new TableEvaluator.OutOfRangeException("table " + t.name() + ": the " + c.name() + " at the node x = "
+                throw new OutOfRangeException("table " + t.name() + ": the " + c.name() + " at the node x = "
                         + approximate(node) + " lies outside the range of " + format.name()
                         + " (out_of_range = \"error\"; choose a wider format or out_of_range = \"saturate\")");
             }
@@ -235,14 +242,14 @@ final class GaussRule {
     }
 
     /** With weight_underflow = "error": every underflowing weight, counted and located, stops the table. */
-    private static void checkNoUnderflow(TableDef t, Grid.Quadrature q, List<Decided> rows) throws TableEvaluator.OutOfRangeException {
+    private static void checkNoUnderflow(TableDef t, Grid.Quadrature q, List<Decided> rows) throws OutOfRangeException {
         List<Decided> tiny = rows.stream().filter(Decided::underflow).toList();
         if (tiny.isEmpty()) {
             return;
         }
         String first = approximate(tiny.get(0).enclosure().nodeBall(tiny.get(0).precBits() + 20));
         String last = approximate(tiny.get(tiny.size() - 1).enclosure().nodeBall(tiny.get(tiny.size() - 1).precBits() + 20));
-        throw new TableEvaluator.OutOfRangeException("table " + t.name() + ": " + (tiny.size() == 1 ? "the weight at the node x = " + first
+        throw new OutOfRangeException("table " + t.name() + ": " + (tiny.size() == 1 ? "the weight at the node x = " + first
                 + " underflows " : tiny.size() + " weights, at nodes from x = " + first + " to x = " + last + ", underflow ")
                 + t.format().name() + (tiny.size() == 1 ? " (its correctly rounded value lies" : " (their correctly rounded values lie")
                 + " below the smallest normal number); set weight_underflow = \"flush\" (" + (tiny.size() == 1 ? "it becomes" : "they become")
@@ -281,12 +288,12 @@ final class GaussRule {
     }
 
     /** Rigorous part of the count: consecutive node enclosures, ascending, must be disjoint. */
-    private static void checkDisjoint(TableDef t, List<Decided> rows) throws TableEvaluator.UndecidedException {
+    private static void checkDisjoint(TableDef t, List<Decided> rows) throws UndecidedException {
         for (int i = 1; i < rows.size(); i++) {
             Ball left = rows.get(i - 1).enclosure().nodeBall(rows.get(i - 1).precBits() + 20);
             Ball right = rows.get(i).enclosure().nodeBall(rows.get(i).precBits() + 20);
             if (left.upper().compareTo(right.lower()) >= 0) {
-                throw new TableEvaluator.UndecidedException("table " + t.name() + ": the nodes near x = " + approximate(left)
+                throw new UndecidedException("table " + t.name() + ": the nodes near x = " + approximate(left)
                         + " and x = " + approximate(right) + " could not be separated (two seeds led to one zero)");
             }
         }

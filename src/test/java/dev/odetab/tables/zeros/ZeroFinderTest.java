@@ -1,5 +1,12 @@
-package dev.odetab.tables;
+package dev.odetab.tables.zeros;
 
+import dev.odetab.tables.Column;
+import dev.odetab.tables.Grid;
+import dev.odetab.tables.OutOfRangeException;
+import dev.odetab.tables.TableDef;
+import dev.odetab.tables.TableEvaluator;
+import dev.odetab.tables.TableResult;
+import dev.odetab.tables.UndecidedException;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -218,11 +225,11 @@ class ZeroFinderTest {
         assertEquals(nearestBits(psi1.negate(), new BigDecimal("1e-50")), bits(r, 0, 1));
         // Rounding down: points just below −1 and at −1 round differently, so the zero is undecided at any precision:
         // exit 3 naming it, never a guessed entry
-        TableEvaluator.UndecidedException e = assertThrows(TableEvaluator.UndecidedException.class,
+        UndecidedException e = assertThrows(UndecidedException.class,
                 () -> zeros(psi(1), "-3", "3", 0, true, List.of("x"), B64, RoundingMode.DOWN, 256));
         assertTrue(e.getMessage().contains("near x = -1"), e.getMessage());
         // the same zero as an end of the search: whether it lies inside cannot be decided either
-        e = assertThrows(TableEvaluator.UndecidedException.class,
+        e = assertThrows(UndecidedException.class,
                 () -> zeros(psi(1), "-1/2", "1", 0, true, List.of("x"), B64, RoundingMode.NEAREST_EVEN, 256));
         assertTrue(e.getMessage().contains("end of the search, x = 1"), e.getMessage());
     }
@@ -258,10 +265,10 @@ class ZeroFinderTest {
     void aSearchWithoutZerosOrWithTooFewIsRefused() throws Exception {
         // Ai > 0 on [0, ∞), and its first zeros are a_1 ≈ −2.338, a_2 ≈ −4.088 (DLMF 9.9, Table 9.9.1, from memory)
         FunctionDef ai = Airy.ai().define(Map.of());
-        TableEvaluator.OutOfRangeException none = assertThrows(TableEvaluator.OutOfRangeException.class,
+        OutOfRangeException none = assertThrows(OutOfRangeException.class,
                 () -> zeros(ai, "0", "3", false, List.of("x")));
         assertTrue(none.getMessage().contains("has no zero on [0, 3]"), none.getMessage());
-        TableEvaluator.OutOfRangeException few = assertThrows(TableEvaluator.OutOfRangeException.class,
+        OutOfRangeException few = assertThrows(OutOfRangeException.class,
                 () -> zeros(ai, "0", "-5", 3, false, List.of("x"), B64, RoundingMode.NEAREST_EVEN, 4096));
         assertTrue(few.getMessage().contains("has only 2 zero(s) on [-5, 0] but count = 3"), few.getMessage());
     }

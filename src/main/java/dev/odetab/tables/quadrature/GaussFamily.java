@@ -1,4 +1,4 @@
-package dev.odetab.tables;
+package dev.odetab.tables.quadrature;
 
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.BallFunctions;

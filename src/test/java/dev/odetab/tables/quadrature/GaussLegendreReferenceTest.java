@@ -1,5 +1,6 @@
-package dev.odetab.tables;
+package dev.odetab.tables.quadrature;
 
+import dev.odetab.tables.TableResult;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 

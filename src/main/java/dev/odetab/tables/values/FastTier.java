@@ -1,5 +1,10 @@
-package dev.odetab.tables;
+package dev.odetab.tables.values;
 
+import dev.odetab.tables.Column;
+import dev.odetab.tables.Grid;
+import dev.odetab.tables.OutOfRangeException;
+import dev.odetab.tables.TableDef;
+import dev.odetab.tables.TableEvaluator;
 import dev.odetab.base.ExprException;
 import dev.odetab.numeric.DDBall;
 import dev.odetab.numeric.Entry;
@@ -64,7 +69,7 @@ final class FastTier {
      * Decides what it can of rows s … e−1 into {@code entries} (indexed from s); returns the rows
      * left undecided (in order) and the largest relative radius of a deciding ball.
      */
-    static Outcome run(TableDef t, int s, int e, Jet start, Entry[][] entries) throws TableEvaluator.OutOfRangeException {
+    static Outcome run(TableDef t, int s, int e, Jet start, Entry[][] entries) throws OutOfRangeException {
         Grid.Uniform grid = (Grid.Uniform) t.grid();
         Rational x0 = grid.exactPoint(s);
         DDBall[][] jets = FastWalk.walk(t.function().equation(), x0, start, grid.step(), e - s);
@@ -110,7 +115,7 @@ final class FastTier {
             if (decided) {
                 for (int c = 0; c < cols.size(); c++) {
                     if (row[c].kind() == Entry.Kind.OUT_OF_RANGE) {
-                        TableEvaluator.checked(t, grid.exactPoint(i), cols.get(c), row[c]);
+                        ValuesEvaluator.checked(t, grid.exactPoint(i), cols.get(c), row[c]);
                     }
                 }
                 entries[i - s] = row;

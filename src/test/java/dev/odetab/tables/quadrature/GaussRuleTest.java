@@ -1,5 +1,11 @@
-package dev.odetab.tables;
+package dev.odetab.tables.quadrature;
 
+import dev.odetab.tables.Column;
+import dev.odetab.tables.Grid;
+import dev.odetab.tables.OutOfRangeException;
+import dev.odetab.tables.TableDef;
+import dev.odetab.tables.TableEvaluator;
+import dev.odetab.tables.TableResult;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -419,7 +425,7 @@ class GaussRuleTest {
         // normal binary32 number 2^-126 (IEEE 754-2019 §3.3, §7.5)
         GaussFamily.Kind h = GaussFamily.Kind.HERMITE;
         Format b32 = Format.BinaryFormat.BINARY32;
-        TableEvaluator.OutOfRangeException e = assertThrows(TableEvaluator.OutOfRangeException.class,
+        OutOfRangeException e = assertThrows(OutOfRangeException.class,
                 () -> rule(h, 100, null, null, b32, RoundingMode.NEAREST_EVEN, false, "node", "weight"));
         assertTrue(e.getMessage().contains("underflow binary32") && e.getMessage().contains("weight_underflow = \"flush\"")
                 && e.getMessage().contains("scaled_weight"), e.getMessage());

@@ -1,5 +1,12 @@
-package dev.odetab.tables;
+package dev.odetab.tables.zeros;
 
+import dev.odetab.tables.Column;
+import dev.odetab.tables.Grid;
+import dev.odetab.tables.OutOfRangeException;
+import dev.odetab.tables.TableDef;
+import dev.odetab.tables.TableEvaluator;
+import dev.odetab.tables.TableResult;
+import dev.odetab.tables.UndecidedException;
 import dev.odetab.series.LocalExpansion;
 
 import dev.odetab.base.ExprException;
@@ -55,7 +62,7 @@ import java.util.Optional;
  * iteration stops when every point of X rounds to the same entry and the other columns,
  * enclosed over X, decide too (Ziv, METHODS §5); when X stops shrinking the precision is
  * doubled, the state at that cell start being recomputed from the normalization point, up to
- * the table's cap (then {@link TableEvaluator.UndecidedException}, naming the zero).
+ * the table's cap (then {@link UndecidedException}, naming the zero).
  *
  * <p><b>Exact zeros.</b> A ball of g with radius 0 and midpoint 0 proves a zero at that
  * rational point: at the normalization point when the normalization value is exactly 0, and
@@ -64,7 +71,7 @@ import java.util.Optional;
  * from its normalization point can only be enclosed: it is decided when the enclosure rounds
  * to one entry, and otherwise the build stops with exit 3 rather than guess.
  */
-final class ZeroFinder {
+public final class ZeroFinder {
     /** How often one cell may be halved before the precision is blamed (a heuristic choice). */
     private static final int MAX_HALVINGS = 24;
 
@@ -110,20 +117,20 @@ final class ZeroFinder {
      * ends included), the first {@code count} of them when a count is given, each row
      * correctly rounded (class comment).
      *
-     * @throws TableEvaluator.UndecidedException when the precision cap cannot isolate or decide a zero
-     * @throws TableEvaluator.OutOfRangeException when the search holds no zero, fewer than
+     * @throws UndecidedException when the precision cap cannot isolate or decide a zero
+     * @throws OutOfRangeException when the search holds no zero, fewer than
      *     {@code count}, or g vanishes identically; or an entry is out of a fixed-point range
      */
-    static TableResult find(TableDef t, Grid.ZeroSearch z) throws ExprException, TableEvaluator.UndecidedException,
-            TableEvaluator.OutOfRangeException {
+    public static TableResult find(TableDef t, Grid.ZeroSearch z) throws ExprException, UndecidedException,
+            OutOfRangeException {
         return new ZeroFinder(t, z).walk();
     }
 
-    private TableResult walk() throws ExprException, TableEvaluator.UndecidedException, TableEvaluator.OutOfRangeException {
+    private TableResult walk() throws ExprException, UndecidedException, OutOfRangeException {
         Rational from = search.from();
         Rational to = search.to();
         if (gPoly != null && gPoly.isZero()) {
-            throw new TableEvaluator.OutOfRangeException("table " + table.name() + ": " + gName + " of " + f.name()
+            throw new OutOfRangeException("table " + table.name() + ": " + gName + " of " + f.name()
                     + " vanishes identically, so every point is a zero; a zeros table needs isolated zeros");
         }
         if (poly == null) {
@@ -185,11 +192,11 @@ final class ZeroFinder {
         }
         String where = "[" + from.min(to).toDecimalOrFraction() + ", " + from.max(to).toDecimalOrFraction() + "]";
         if (rows.isEmpty()) {
-            throw new TableEvaluator.OutOfRangeException("table " + table.name() + ": " + gName + " has no zero on " + where
+            throw new OutOfRangeException("table " + table.name() + ": " + gName + " has no zero on " + where
                     + " (proven: " + cells + " cells, each with " + gName + " of one sign or strictly monotone); widen 'search'");
         }
         if (search.count() > rows.size()) {
-            throw new TableEvaluator.OutOfRangeException("table " + table.name() + ": " + gName + " has only " + rows.size()
+            throw new OutOfRangeException("table " + table.name() + ": " + gName + " has only " + rows.size()
                     + " zero(s) on " + where + " but count = " + search.count() + "; widen 'search' or lower 'count'");
         }
         return new TableResult(table, rows, maxRelative, maxPrecBits, proof(where, reached));
@@ -242,7 +249,7 @@ final class ZeroFinder {
      * The sign of g at an end of the search interval, 0 for a proven exact zero; raises the
      * precision (from the normalization point) while the enclosure contains 0 but is not exact.
      */
-    private int endSign(LocalExpansion here, String which) throws ExprException, TableEvaluator.UndecidedException {
+    private int endSign(LocalExpansion here, String which) throws ExprException, UndecidedException {
         Ball g = g(here.at(Rational.ZERO));
         int bits = here.precBits();
         boolean fresh = false;
@@ -317,9 +324,9 @@ final class ZeroFinder {
     }
 
     /** Twice the precision, at most the cap; at the cap, the table cannot be decided. */
-    private int higher(int bits, String what) throws TableEvaluator.UndecidedException {
+    private int higher(int bits, String what) throws UndecidedException {
         if (bits >= table.capBits()) {
-            throw new TableEvaluator.UndecidedException("table " + table.name() + ": the precision cap of " + table.capBits()
+            throw new UndecidedException("table " + table.name() + ": the precision cap of " + table.capBits()
                     + " bits cannot " + what + " (raise precision_cap_bits)");
         }
         int next = Math.min(table.capBits(), 2 * bits);
@@ -330,8 +337,8 @@ final class ZeroFinder {
     // ---- one stretch where g is monotone ----------------------------------------------------
 
     /** The zero of a finished stretch, if its end signs say there is one (0 marks an exact zero at an end of the search). */
-    private void close(List<Cell> stretch, int signStart, int signEnd) throws ExprException, TableEvaluator.UndecidedException,
-            TableEvaluator.OutOfRangeException {
+    private void close(List<Cell> stretch, int signStart, int signEnd) throws ExprException, UndecidedException,
+            OutOfRangeException {
         if (signStart == 0 || done()) {
             return;
         }
@@ -342,8 +349,8 @@ final class ZeroFinder {
         }
     }
 
-    private void refine(List<Cell> stretch, int signStart) throws ExprException, TableEvaluator.UndecidedException,
-            TableEvaluator.OutOfRangeException {
+    private void refine(List<Cell> stretch, int signStart) throws ExprException, UndecidedException,
+            OutOfRangeException {
         Rational first = stretch.get(0).a();
         Rational last = stretch.get(stretch.size() - 1).b();
         Bracket x = new Bracket(first.min(last), first.max(last), direction > 0 ? signStart : -signStart, slopeBound(stretch));
@@ -416,8 +423,8 @@ final class ZeroFinder {
     }
 
     /** Interval Newton steps on x with the series at {@code local}, raising the precision when x stops shrinking. */
-    private void newton(Bracket x, LocalExpansion local) throws ExprException, TableEvaluator.UndecidedException,
-            TableEvaluator.OutOfRangeException {
+    private void newton(Bracket x, LocalExpansion local) throws ExprException, UndecidedException,
+            OutOfRangeException {
         LocalExpansion loc = local;
         boolean fresh = false;
         while (true) {
@@ -475,7 +482,7 @@ final class ZeroFinder {
 
     /** The entries of the row whose x entry is {@code xEntry}, with the other columns enclosed in {@code over}; empty if one is undecided. */
     private Optional<List<Entry>> otherColumns(Entry xEntry, LocalExpansion.Range over, Rational near)
-            throws TableEvaluator.OutOfRangeException {
+            throws OutOfRangeException {
         List<Entry> entries = new ArrayList<>();
         for (Column col : table.columns()) {
             Entry e;
@@ -496,8 +503,8 @@ final class ZeroFinder {
     }
 
     /** Records the zero at the rational q, proven exact; the other columns by the precision loop of {@link FunctionEvaluator#entry}. */
-    private void addExact(Rational q) throws ExprException, TableEvaluator.UndecidedException,
-            TableEvaluator.OutOfRangeException {
+    private void addExact(Rational q) throws ExprException, UndecidedException,
+            OutOfRangeException {
         List<Entry> entries = new ArrayList<>();
         for (Column col : table.columns()) {
             Entry e;
@@ -512,7 +519,7 @@ final class ZeroFinder {
                     maxPrecBits = Math.max(maxPrecBits, d.precBits());
                     e = d.entry();
                 } catch (PrecisionCapException ex) {
-                    throw new TableEvaluator.UndecidedException("table " + table.name() + ": the precision cap of " + table.capBits()
+                    throw new UndecidedException("table " + table.name() + ": the precision cap of " + table.capBits()
                             + " bits cannot decide the " + col.name() + " at the zero x = " + q.toDecimalOrFraction()
                             + " (raise precision_cap_bits)");
                 }
@@ -523,9 +530,9 @@ final class ZeroFinder {
         rows.add(new TableResult.Row(q, entries));
     }
 
-    private Entry checked(Column col, Entry e, Rational near) throws TableEvaluator.OutOfRangeException {
+    private Entry checked(Column col, Entry e, Rational near) throws OutOfRangeException {
         if (e.kind() == Entry.Kind.OUT_OF_RANGE) {
-            throw new TableEvaluator.OutOfRangeException("table " + table.name() + ": the " + col.name() + " at the zero near x = "
+            throw new OutOfRangeException("table " + table.name() + ": the " + col.name() + " at the zero near x = "
                     + approxOf(near) + " lies outside the range of " + table.format().name()
                     + " (out_of_range = \"error\"; choose a wider format or out_of_range = \"saturate\")");
         }

@@ -1,5 +1,10 @@
-package dev.odetab.tables;
+package dev.odetab.tables.values;
 
+import dev.odetab.tables.Column;
+import dev.odetab.tables.Grid;
+import dev.odetab.tables.TableDef;
+import dev.odetab.tables.TableEvaluator;
+import dev.odetab.tables.TableResult;
 import dev.odetab.base.Progress;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -36,7 +41,7 @@ class ChunkedEvaluationTest {
     @Test
     void theResultDoesNotDependOnTheNumberOfThreads() throws Exception {
         TableDef t = airy(Format.BinaryFormat.BINARY64, RoundingMode.NEAREST_EVEN, "-6", "2", "1/600");
-        assertTrue(t.grid().size() > 4 * TableEvaluator.chunkSize(t), "several chunks");
+        assertTrue(t.grid().size() > 4 * ValuesEvaluator.chunkSize(t), "several chunks");
         TableResult one = TableEvaluator.evaluate(t);
         for (int threads : new int[] {2, 3}) {
             ExecutorService pool = Executors.newFixedThreadPool(threads);
