@@ -4,6 +4,9 @@
  * ${line}
 </#list>
  */
+<#if table.javaPackage?has_content>
+package ${table.javaPackage};
+</#if>
 
 /** Table ${table.name}: ${table.length} entries, ${table.format}, rounded ${table.rounding}. */
 public final class ${table.className} {

@@ -52,7 +52,7 @@ final class BuildCommand implements Callable<Integer> {
     @Option(names = "--quiet", description = "no progress bars (shown otherwise on stderr when it is a terminal, for phases longer than a second)")
     boolean quiet;
 
-    private record Job(SpecFile spec, TableDef table) {
+    private record Job(SpecFile spec, TableDef table, String javaPackage) {
     }
 
     /** The table being awaited when evaluation failed (its error is located at its spec entry). */
@@ -77,7 +77,7 @@ final class BuildCommand implements Callable<Integer> {
             for (Path p : specs) {
                 SpecFile s = SpecFile.load(p);
                 for (TableDef t : s.tables()) {
-                    work.add(new Job(s, t));
+                    work.add(new Job(s, t, s.javaPackage(t.name())));
                 }
             }
             Path dir = out != null ? out : defaultOut(specs.get(0));
@@ -88,7 +88,7 @@ final class BuildCommand implements Callable<Integer> {
                 for (int i = 0; i < work.size(); i++) {
                     Job j = work.get(i);
                     outputs.add(results.get(i), Provenance.of(Provenance.specPath(j.spec().path(), dir), j.spec().display(), j.spec().bytes(), results.get(i), ToolVersion.get()),
-                            j.spec().title());
+                            j.spec().title(), j.javaPackage());
                 }
                 if (check) {
                     List<String> diff = outputs.differences();

@@ -25,7 +25,7 @@ final class EmitModel {
     }
 
     /** The model of a table; the literals are made as a template reads them, and reported to {@code progress}. */
-    static Map<String, Object> of(TableResult result, Provenance provenance, String specTitle, Progress progress) {
+    static Map<String, Object> of(TableResult result, Provenance provenance, String specTitle, String javaPackage, Progress progress) {
         var t = result.table();
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("tool", Map.of("version", provenance.toolVersion()));
@@ -39,6 +39,7 @@ final class EmitModel {
         table.put("identifier", t.name().toLowerCase(Locale.ROOT));
         table.put("macro", t.name().toUpperCase(Locale.ROOT));
         table.put("className", className(t.name()));
+        table.put("javaPackage", javaPackage);
         table.put("length", Integer.toString(result.rows().size()));
         table.put("format", t.format().name());
         table.put("rounding", t.rounding().spelling());

@@ -108,9 +108,10 @@ public final class Outputs implements AutoCloseable {
         void render(OutputStream out) throws IOException, TemplateEngine.TemplateProblem;
     }
 
-    /** Renders the outputs the table asks for. */
-    public void add(TableResult result, Provenance provenance, String specTitle) throws TemplateError, ClashError, IOException {
-        Map<String, Object> model = EmitModel.of(result, provenance, specTitle, progress);
+    /** Renders the outputs the table asks for; {@code javaPackage} is empty for the default package. */
+    public void add(TableResult result, Provenance provenance, String specTitle, String javaPackage)
+            throws TemplateError, ClashError, IOException {
+        Map<String, Object> model = EmitModel.of(result, provenance, specTitle, javaPackage, progress);
         String name = result.table().name();
         progress.start(name, entriesWritten(result));
         for (String output : result.table().outputs()) {

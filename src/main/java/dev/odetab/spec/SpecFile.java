@@ -18,6 +18,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import javax.lang.model.SourceVersion;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashSet;
@@ -39,7 +40,7 @@ import org.tomlj.TomlTable;
  * character inside the string (exact for strings without escape sequences).
  */
 public final class SpecFile {
-    static final Set<String> TOP_LEVEL_KEYS = Set.of("title", "functions", "tables");
+    static final Set<String> TOP_LEVEL_KEYS = Set.of("title", "java_package", "functions", "tables");
     static final Set<String> EQUATION_KEYS = Set.of("equation", "at", "value", "slope");
     private static final Pattern COLUMN_IN_TEXT = Pattern.compile("at column (\\d+)");
 
@@ -115,6 +116,37 @@ public final class SpecFile {
     /** The spec's title, or empty. */
     public String title() {
         return toml.contains("title") ? toml.getString("title") : "";
+    }
+
+    /**
+     * The package of a table's {@code java} output: the table's own {@code java_package}, else the
+     * spec's top-level one, else empty (the default package, which no named package can import).
+     *
+     * @throws InputError at the key when the value is not a string or not a Java package name
+     *     (dot-separated identifiers, no keyword: JLS 7.4.1 and 3.9)
+     */
+    public String javaPackage(String table) throws InputError {
+        List<String> key = List.of("tables", table, "java_package");
+        if (!toml.contains(key)) {
+            key = List.of("java_package");
+        }
+        if (!toml.contains(key)) {
+            return "";
+        }
+        Object v = toml.get(key);
+        if (!(v instanceof String text)) {
+            throw error(key, "'java_package' must be a string, like \"com.example.tables\"");
+        }
+        int column = 1;
+        for (String part : text.split("\\.", -1)) {
+            if (!SourceVersion.isIdentifier(part) || SourceVersion.isKeyword(part)) {
+                throw errorInString(key, column, "'" + text + "' is not a Java package name: '" + part + "' is "
+                        + (SourceVersion.isKeyword(part) ? "a Java keyword" : "not a Java identifier")
+                        + " (write dot-separated identifiers, like \"com.example.tables\")");
+            }
+            column += part.length() + 1;
+        }
+        return text;
     }
 
     /** Every table of the spec, validated; the first problem found is the error. */

@@ -27,7 +27,7 @@ import org.tomlj.TomlTable;
 /** Reading and validating the {@code [tables.*]} part of a spec (DESIGN.md "Spec file"). */
 final class SpecTables {
     static final Set<String> TABLE_KEYS = new LinkedHashSet<>(List.of("function", "kind", "grid", "points", "columns",
-            "format", "rounding", "out_of_range", "precision_cap_bits", "outputs", "terms", "search", "count", "of", "weight_underflow"));
+            "format", "rounding", "out_of_range", "precision_cap_bits", "outputs", "java_package", "terms", "search", "count", "of", "weight_underflow"));
     static final Set<String> GRID_KEYS = new LinkedHashSet<>(List.of("from", "to", "step"));
     static final Set<String> KINDS = new LinkedHashSet<>(List.of("values", "zeros", "quadrature", "taylor"));
     static final Set<String> BUILT_IN_OUTPUTS = new LinkedHashSet<>(List.of("csv", "c", "java"));

@@ -109,4 +109,34 @@ class JavaCompileTest {
             case SIGNED_INTEGER, UNSIGNED_INTEGER -> v.toString();
         };
     }
+
+    /** A spec's java_package gives the class a package line, so code in a named package can import it. */
+    @Test
+    void aJavaPackageMakesTheClassImportable(@TempDir Path tmp) throws Exception {
+        Path spec = tmp.resolve("packaged.toml");
+        Files.writeString(spec, String.join("\n", "java_package = \"org.example.optics\"", "[tables.ai4]", "function = \"airy-ai\"",
+                "grid = { from = \"0\", to = \"1\", step = \"1/4\" }", "columns = [\"x\", \"value\"]", "outputs = [\"java\"]", ""));
+        Path user = tmp.resolve("src/org/example/app/Use.java");
+        Files.createDirectories(user.getParent());
+        Files.writeString(user, String.join("\n", "package org.example.app;", "import org.example.optics.Ai4;",
+                "public final class Use {", "    public static double first() {", "        return Ai4.value(0);", "    }", "}", ""));
+        Path out = tmp.resolve("out");
+        CliRunner.Result r = CliRunner.run("build", spec.toString(), "--out", out.toString());
+        assertEquals(0, r.code(), r.err());
+        assertTrue(Files.readString(out.resolve("Ai4.java")).contains("\n */\npackage org.example.optics;\n\n/** Table ai4"));
+        JavaCompiler javac = ToolProvider.getSystemJavaCompiler();
+        DiagnosticCollector<JavaFileObject> diagnostics = new DiagnosticCollector<>();
+        Path classes = tmp.resolve("classes");
+        try (StandardJavaFileManager fm = javac.getStandardFileManager(diagnostics, Locale.ROOT, StandardCharsets.UTF_8)) {
+            List<String> options = List.of("-Xlint:all", "-Werror", "--release", "17", "-d", classes.toString());
+            boolean ok = javac.getTask(null, fm, diagnostics, options, null,
+                    fm.getJavaFileObjectsFromFiles(List.of(out.resolve("Ai4.java").toFile(), user.toFile()))).call();
+            assertTrue(ok, "javac: " + diagnostics.getDiagnostics());
+        }
+        try (URLClassLoader loader = new URLClassLoader(new URL[] {classes.toUri().toURL()}, null)) {
+            // Ai(0) = 0.35502805388781723926... (DLMF 9.2.3 evaluated; the binary64 entry is its rounding)
+            double first = (double) loader.loadClass("org.example.app.Use").getMethod("first").invoke(null);
+            assertEquals(0.35502805388781723926, first);
+        }
+    }
 }

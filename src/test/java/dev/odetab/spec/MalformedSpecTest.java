@@ -32,10 +32,15 @@ class MalformedSpecTest {
     private static final Map<String, String> EXPECTED = new TreeMap<>(Map.ofEntries(
             Map.entry("toml-syntax.toml", "3:45: TOML syntax: Unexpected end of line, expected }"),
             Map.entry("unknown-top-level-key.toml",
-                    "2:1: unknown key 'tabels'; did you mean 'tables'? (allowed at the top: functions, tables, title)"),
+                    "2:1: unknown key 'tabels'; did you mean 'tables'? (allowed at the top: functions, java_package, tables, title)"),
             Map.entry("unknown-table-key.toml", "4:1: unknown key 'fromat'; did you mean 'format'? (a table has: function, kind, "
-                    + "grid, points, columns, format, rounding, out_of_range, precision_cap_bits, outputs, terms, search, count, of, weight_underflow)"),
+                    + "grid, points, columns, format, rounding, out_of_range, precision_cap_bits, outputs, java_package, terms, search, count, of, weight_underflow)"),
             Map.entry("format-not-a-string.toml", "4:1: 'format' must be a string"),
+            Map.entry("java-package-keyword.toml", "1:29: 'com.example.new.tables' is not a Java package name: 'new' is a Java keyword"
+                    + " (write dot-separated identifiers, like \"com.example.tables\")"),
+            Map.entry("java-package-not-an-identifier.toml", "5:24: 'tables.2d' is not a Java package name: '2d' is not a Java identifier"
+                    + " (write dot-separated identifiers, like \"com.example.tables\")"),
+            Map.entry("java-package-not-a-string.toml", "4:1: 'java_package' must be a string, like \"com.example.tables\""),
             Map.entry("step-does-not-divide.toml", "3:32: the step 0.375 does not divide the range from 0 to 1 (8/3 steps)"),
             Map.entry("step-wrong-sign.toml", "3:33: the step 0.25 does not lead from 1 to -1"),
             Map.entry("grid-and-points.toml", "4:1: give either 'grid' or 'points', not both"),
