@@ -9,6 +9,7 @@
  * format:        binary32, rounding nearest-even (roundTiesToEven: the nearest entry, ties to the even one)
  * error:         largest proven relative error before rounding 2.38e-27 (enclosure radius / |value|), working precision up to 106 bits
  * Every entry is the correct rounding of the exact value, decided from a proven enclosure.
+ * Before using this table in a product, read "Cautions for firmware and safety-related use" in odetab's README.
  */
 #ifndef ODETAB_PSI02_H
 #define ODETAB_PSI02_H

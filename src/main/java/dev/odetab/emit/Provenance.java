@@ -70,6 +70,7 @@ public record Provenance(String specPath, String specSha256, String table, Strin
         r.add("format:        " + format + ", rounding " + rounding);
         r.add("error:         " + maxError);
         r.add("Every entry is the correct rounding of the exact value, decided from a proven enclosure.");
+        r.add("Before using this table in a product, read \"Cautions for firmware and safety-related use\" in odetab's README.");
         return r;
     }
 }
