@@ -1,4 +1,4 @@
-/* ai_table.c -- Airy Ai lookup for the caustic fit (QI-LS200 firmware, tablegen 1.3) */
+/* ai_table.c -- Airy Ai lookup for the caustic fit (QI-LS200 firmware, made by qi-aitab 1.3, a QI in-house script) */
 #include <stdint.h>
 
 #define AI_TABLE_LEN 97   /* x = -4 .. 2 step 1/16 */

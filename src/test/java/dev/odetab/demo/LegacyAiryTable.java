@@ -35,7 +35,7 @@ public final class LegacyAiryTable {
 
     public static void main(String[] args) throws IOException {
         StringBuilder sb = new StringBuilder();
-        sb.append("/* ai_table.c -- Airy Ai lookup for the caustic fit (QI-LS200 firmware, tablegen 1.3) */\n");
+        sb.append("/* ai_table.c -- Airy Ai lookup for the caustic fit (QI-LS200 firmware, made by qi-aitab 1.3, a QI in-house script) */\n");
         sb.append("#include <stdint.h>\n\n#define AI_TABLE_LEN 97   /* x = -4 .. 2 step 1/16 */\n");
         sb.append("#define AI_TABLE_X0 (-4.0f)\n\n");
         sb.append("const float ai_table[AI_TABLE_LEN] = {\n");

@@ -134,7 +134,8 @@ class JavaCompileTest {
             assertTrue(ok, "javac: " + diagnostics.getDiagnostics());
         }
         try (URLClassLoader loader = new URLClassLoader(new URL[] {classes.toUri().toURL()}, null)) {
-            // Ai(0) = 0.35502805388781723926... (DLMF 9.2.3 evaluated; the binary64 entry is its rounding)
+            // Ai(0) = 0.35502805388781723926… (closed form DLMF 9.2.3; digits recalled from memory, as in
+            // reference-data/airy-dlmf-9.2.csv): the binary64 entry is their rounding
             double first = (double) loader.loadClass("org.example.app.Use").getMethod("first").invoke(null);
             assertEquals(0.35502805388781723926, first);
         }

@@ -55,7 +55,7 @@ class GaussFamilyTest {
 
     @Test
     void jacobiMatrixSeedsAreCloseToTheZeros() throws Exception {
-        // Legendre n = 5 zeros (A&S 25.4.29 table, from memory): 0, ±0.5384693101056831, ±0.9061798459386640
+        // Legendre n = 5 zeros (A&S Table 25.4, the nodes of the rule whose weights are formula 25.4.29; from memory): 0, ±0.5384693101056831, ±0.9061798459386640
         double[] seeds = GaussRule.eigenvaluesEstimate(new GaussFamily(GaussFamily.Kind.LEGENDRE, 5, Rational.ZERO, Rational.ZERO), 0, 5);
         double[] expected = {-0.906179845938664, -0.5384693101056831, 0, 0.5384693101056831, 0.906179845938664};
         for (int i = 0; i < 5; i++) {

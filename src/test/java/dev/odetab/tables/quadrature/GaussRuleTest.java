@@ -105,7 +105,7 @@ class GaussRuleTest {
     @Test
     void gaussLegendreClosedFormsForTwoThreeAndFivePoints() throws Exception {
         for (Format f : List.of(B64, D40)) {
-            // A&S 25.4.29 table (from memory, derived again from P_2 = (3x² − 1)/2, P_3 = (5x³ − 3x)/2):
+            // A&S Table 25.4 (nodes and weights; the weights by formula 25.4.29), recalled from memory and derived again from P_2 = (3x² − 1)/2, P_3 = (5x³ − 3x)/2):
             // n = 2: ±1/√3, weights 1; n = 3: 0, ±√(3/5), weights 8/9, 5/9
             Apfloat s3 = ApfloatMath.sqrt(ap("3"));
             TableResult r2 = rule(GaussFamily.Kind.LEGENDRE, 2, f);
