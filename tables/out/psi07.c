@@ -4,7 +4,7 @@
  * table:         psi07
  * function:      psi7 (../quillmere.toml#psi7)
  * equation:      y'' + (-x^2 + 15)*y = 0
- * normalization: y(0) = 0/sqrt(645120*sqrt(pi)), y'(0) = -1680/sqrt(645120*sqrt(pi)) [DLMF 18.3, 18.5.13, 18.8 (Table 18.8.1), 18.9.25]
+ * normalization: y(0) = 0, y'(0) = -1680/sqrt(645120*sqrt(pi)) [DLMF 18.3, 18.5.13, 18.8 (Table 18.8.1), 18.9.25]
  * grid:          from -4 to 4 step 0.0625 (129 points)
  * format:        binary32, rounding nearest-even (roundTiesToEven: the nearest entry, ties to the even one)
  * error:         largest proven relative error before rounding 7.02e-27 (enclosure radius / |value|), working precision up to 106 bits

@@ -4,7 +4,7 @@
  * table:         psi08
  * function:      psi8 (../quillmere.toml#psi8)
  * equation:      y'' + (-x^2 + 17)*y = 0
- * normalization: y(0) = 1680/sqrt(10321920*sqrt(pi)), y'(0) = 0/sqrt(10321920*sqrt(pi)) [DLMF 18.3, 18.5.13, 18.8 (Table 18.8.1), 18.9.25]
+ * normalization: y(0) = 1680/sqrt(10321920*sqrt(pi)), y'(0) = 0 [DLMF 18.3, 18.5.13, 18.8 (Table 18.8.1), 18.9.25]
  * grid:          from -4 to 4 step 0.0625 (129 points)
  * format:        binary32, rounding nearest-even (roundTiesToEven: the nearest entry, ties to the even one)
  * error:         largest proven relative error before rounding 1.39e-26 (enclosure radius / |value|), working precision up to 106 bits

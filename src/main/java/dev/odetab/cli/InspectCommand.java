@@ -1,6 +1,7 @@
 package dev.odetab.cli;
 
 import dev.odetab.expr.ConstExpr;
+import dev.odetab.expr.ConstSimplify;
 import dev.odetab.base.ExprException;
 import dev.odetab.expr.Poly;
 import dev.odetab.expr.RationalFunction;
@@ -126,7 +127,8 @@ final class InspectCommand implements Callable<Integer> {
     /** The expression, and its value when the expression is not already a plain number. */
     private static String constant(ConstExpr e) throws ExprException {
         String value = show(e.evaluate(WORK_BITS));
-        return e instanceof ConstExpr.Number ? value : e + " = " + value;
+        ConstExpr shown = ConstSimplify.of(e);
+        return shown instanceof ConstExpr.Number ? value : shown + " = " + value;
     }
 
     /** Correctly rounded to 20 digits when the enclosure decides it, else the enclosure itself. */

@@ -1,5 +1,6 @@
 package dev.odetab.emit;
 
+import dev.odetab.expr.ConstSimplify;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -38,8 +39,8 @@ public record Provenance(String specPath, String specSha256, String table, Strin
         var f = t.function();
         String source = f.source().equals("defined in " + specDisplay) ? "defined in " + specPath : f.source();
         String name = f.name().startsWith(specDisplay + "#") ? specPath + f.name().substring(specDisplay.length()) : f.name();
-        String normalization = "y(" + f.at().toDecimalOrFraction() + ") = " + f.value() + ", y'(" + f.at().toDecimalOrFraction()
-                + ") = " + f.slope() + (source.isEmpty() ? "" : " [" + source + "]");
+        String normalization = "y(" + f.at().toDecimalOrFraction() + ") = " + ConstSimplify.of(f.value()) + ", y'("
+                + f.at().toDecimalOrFraction() + ") = " + ConstSimplify.of(f.slope()) + (source.isEmpty() ? "" : " [" + source + "]");
         String maxError = r.maxRelativeRadius().signum() == 0
                 ? "none: every entry was computed exactly before rounding"
                 : "largest proven relative error before rounding " + r.maxRelativeRadius().toString().replace("E", "e")

@@ -62,4 +62,12 @@ class InspectCommandTest {
         assertEquals(0, q.code(), q.err());
         assertTrue(!q.out().contains("exact           polynomial"), q.out());
     }
+
+    @Test
+    void normalizationsPrintSimplified() {
+        CliRunner.Result r = CliRunner.run("inspect", "weber-u", "-p", "a=-1/2");
+        assertEquals(0, r.code(), r.err());
+        // was sqrt(pi)/(2^(-1/2/2 + 1/4)*gamma(3/4 + (-1/2/2)))
+        assertTrue(r.out().contains("normalization   y(0) = sqrt(pi)/gamma(0.5) = 1.0000000000000000000\n"), r.out());
+    }
 }
