@@ -4,7 +4,7 @@ import dev.odetab.numeric.Entry;
 import dev.odetab.numeric.Format;
 import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.Rounding;
-import dev.odetab.numeric.RoundingMode;
+import dev.odetab.numeric.Target;
 import java.math.BigInteger;
 
 /**
@@ -81,7 +81,7 @@ final class Held {
 
     /** Exact: v rounded to nearest-even in a binary format; null when that overflows to infinity. */
     static Rational held(Rational v, Format.BinaryFormat f) {
-        Entry e = Rounding.round(v, f, RoundingMode.NEAREST_EVEN, null);
+        Entry e = Rounding.round(v, Target.nearest(f));
         return e.kind() == Entry.Kind.INFINITE ? null : e.value();
     }
 

@@ -6,6 +6,7 @@ import dev.odetab.numeric.Entry;
 import dev.odetab.numeric.Format;
 import dev.odetab.numeric.OutOfRange;
 import dev.odetab.numeric.RoundingMode;
+import dev.odetab.numeric.Target;
 import dev.odetab.numeric.Precision;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.FunctionDef;
@@ -121,10 +122,11 @@ final class EvalCommand implements Callable<Integer> {
         }
         RoundingMode mode = roundingMode();
         OutOfRange policy = outOfRangePolicy();
+        Target target = new Target(fmt, mode, policy);
         for (int i = 0; i < xs.size(); i++) {
             FunctionEvaluator.Decided r;
             try {
-                r = FunctionEvaluator.entry(f, xs.get(i), derivative, fmt, mode, policy, capBits);
+                r = FunctionEvaluator.entry(f, xs.get(i), derivative, target, capBits);
             } catch (PrecisionCapException e) {
                 throw new PointLimit(points.get(i), e);
             }

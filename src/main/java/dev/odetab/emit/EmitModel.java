@@ -2,10 +2,9 @@ package dev.odetab.emit;
 
 import dev.odetab.numeric.Entry;
 import dev.odetab.numeric.Format;
-import dev.odetab.numeric.OutOfRange;
 import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.Rounding;
-import dev.odetab.numeric.RoundingMode;
+import dev.odetab.numeric.Target;
 import dev.odetab.tables.Column;
 import dev.odetab.tables.Grid;
 import dev.odetab.base.Progress;
@@ -90,7 +89,7 @@ final class EmitModel {
 
     /** A grid constant: its exact text and its binary64 nearest-even hex literal (and whether that is exact). */
     private static Map<String, Object> constant(Rational r) {
-        Entry e = Rounding.round(r, Format.BinaryFormat.BINARY64, RoundingMode.NEAREST_EVEN, OutOfRange.ERROR);
+        Entry e = Rounding.round(r, Target.nearest(Format.BinaryFormat.BINARY64));
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("exact", r.toDecimalOrFraction());
         m.put("binary64", e.hexLiteral());

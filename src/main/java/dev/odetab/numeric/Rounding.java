@@ -57,18 +57,20 @@ public final class Rounding {
      * whether x lay below the range.</li>
      * </ul>
      *
-     * @param policy used by fixed-point formats only; may be null for the others
-     * @throws NullPointerException when exact, f or m is null, or policy is null for fixed point
+     * <p>Format f, mode m and policy are those of {@code target}; the policy is read by
+     * fixed-point formats only.
+     *
+     * @throws NullPointerException when exact is null
      */
-    public static Entry round(Rational exact, Format f, RoundingMode m, OutOfRange policy) {
+    public static Entry round(Rational exact, Target target) {
         Objects.requireNonNull(exact, "exact");
-        Objects.requireNonNull(m, "rounding mode");
-        Objects.requireNonNull(f, "format");
+        Format f = target.format();
+        RoundingMode m = target.rounding();
         return switch (f.kind()) {
             case BINARY -> roundBinary(exact, (BinaryFormat) f, m);
             case DOUBLE_DOUBLE -> roundDoubleDouble(exact, m);
             case DECIMAL -> roundDecimal(exact, (DecimalFormat) f, m);
-            case FIXED -> roundFixed(exact, (FixedFormat) f, m, Objects.requireNonNull(policy, "out-of-range policy"));
+            case FIXED -> roundFixed(exact, (FixedFormat) f, m, target.outOfRange());
         };
     }
 
@@ -91,12 +93,12 @@ public final class Rounding {
      * <p>Preconditions: the ball contains the exact value (the caller's proof). On failure
      * (ends differ) the caller raises the working precision or reports the entry undecided.
      */
-    public static Optional<Entry> decide(Ball enclosure, Format f, RoundingMode m, OutOfRange policy) {
+    public static Optional<Entry> decide(Ball enclosure, Target target) {
         if (enclosure.isExact()) {
-            return Optional.of(round(Rational.of(enclosure.mid()), f, m, policy));
+            return Optional.of(round(Rational.of(enclosure.mid()), target));
         }
-        Entry low = round(Rational.of(enclosure.lower()), f, m, policy);
-        Entry high = round(Rational.of(enclosure.upper()), f, m, policy);
+        Entry low = round(Rational.of(enclosure.lower()), target);
+        Entry high = round(Rational.of(enclosure.upper()), target);
         return low.equals(high) ? Optional.of(low) : Optional.empty();
     }
 

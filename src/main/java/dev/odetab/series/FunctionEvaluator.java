@@ -4,12 +4,11 @@ import dev.odetab.base.ExprException;
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.DecimalDigits;
 import dev.odetab.numeric.Entry;
-import dev.odetab.numeric.Format;
-import dev.odetab.numeric.OutOfRange;
 import dev.odetab.numeric.Rounding;
 import dev.odetab.numeric.RoundingMode;
 import dev.odetab.numeric.Precision;
 import dev.odetab.numeric.Rational;
+import dev.odetab.numeric.Target;
 import dev.odetab.ode.FunctionDef;
 import dev.odetab.ode.SingularCrossingException;
 import dev.odetab.expr.Poly;
@@ -91,23 +90,23 @@ public final class FunctionEvaluator {
     }
 
     /**
-     * y(x), or y'(x) when {@code derivative}, correctly rounded into {@code format} with the
-     * given mode (Ziv's loop; exact polynomials are rounded from their exact value).
+     * y(x), or y'(x) when {@code derivative}, correctly rounded to {@code target} (Ziv's loop;
+     * exact polynomials are rounded from their exact value).
      *
      * @throws PrecisionCapException when {@code capBits} is not enough to decide the rounding
      */
-    public static Decided entry(FunctionDef f, Rational x, boolean derivative, Format format, RoundingMode mode,
-            OutOfRange policy, int capBits) throws ExprException, PrecisionCapException {
+    public static Decided entry(FunctionDef f, Rational x, boolean derivative, Target target, int capBits)
+            throws ExprException, PrecisionCapException {
         Optional<Rational> exact = exact(f, x, derivative);
         if (exact.isPresent()) {
-            return new Decided(Rounding.round(exact.get(), format, mode, policy), 0, 0, 0, 0, true);
+            return new Decided(Rounding.round(exact.get(), target), 0, 0, 0, 0, true);
         }
-        int needed = format.significantBits();
+        int needed = target.format().significantBits();
         Enclosure[] last = new Enclosure[1];
         PrecisionLoop.Outcome<Entry> out = PrecisionLoop.<Entry, ExprException>run(prec -> {
             last[0] = enclose(f, x, prec);
             return derivative ? last[0].jet().derivative() : last[0].jet().value();
-        }, b -> Rounding.decide(b, format, mode, policy), needed, PrecisionLoop.chooseStartBits(format), capBits);
+        }, b -> Rounding.decide(b, target), needed, PrecisionLoop.chooseStartBits(target.format()), capBits);
         return new Decided(out.result(), out.precBits(), out.attempts(), last[0].steps(), last[0].terms(), false);
     }
 

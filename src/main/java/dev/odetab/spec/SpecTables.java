@@ -7,6 +7,7 @@ import dev.odetab.numeric.Format;
 import dev.odetab.numeric.OutOfRange;
 import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.RoundingMode;
+import dev.odetab.numeric.Target;
 import dev.odetab.ode.FunctionDef;
 import dev.odetab.ode.family.Catalog;
 import dev.odetab.tables.Column;
@@ -164,7 +165,7 @@ final class SpecTables {
             }
         }
         List<String> outputs = outputs(base, t, javaEntries(grid, columns, format));
-        return new TableDef(name, fname, f, grid, columns, format, rounding, outOfRange, cap, outputs);
+        return new TableDef(name, fname, f, grid, columns, new Target(format, rounding, outOfRange), cap, outputs);
     }
 
     private FunctionDef function(List<String> key, String fname) throws InputError {

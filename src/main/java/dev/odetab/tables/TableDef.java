@@ -3,6 +3,7 @@ package dev.odetab.tables;
 import dev.odetab.numeric.Format;
 import dev.odetab.numeric.OutOfRange;
 import dev.odetab.numeric.RoundingMode;
+import dev.odetab.numeric.Target;
 import dev.odetab.ode.FunctionDef;
 import java.util.List;
 
@@ -14,16 +15,29 @@ import java.util.List;
  * @param function the function
  * @param grid the points
  * @param columns the columns, in order
- * @param format the entries' format
- * @param rounding the rounding mode
- * @param outOfRange the fixed-point policy
+ * @param target the entries' format, rounding mode and fixed-point policy
  * @param capBits the precision cap of the precision loop
  * @param outputs template names or paths, in order
  */
 public record TableDef(String name, String functionName, FunctionDef function, Grid grid, List<Column> columns,
-        Format format, RoundingMode rounding, OutOfRange outOfRange, int capBits, List<String> outputs) {
+        Target target, int capBits, List<String> outputs) {
     public TableDef {
         columns = List.copyOf(columns);
         outputs = List.copyOf(outputs);
+    }
+
+    /** The entries' format, {@code target().format()}. */
+    public Format format() {
+        return target.format();
+    }
+
+    /** The rounding mode, {@code target().rounding()}. */
+    public RoundingMode rounding() {
+        return target.rounding();
+    }
+
+    /** The fixed-point policy, {@code target().outOfRange()}. */
+    public OutOfRange outOfRange() {
+        return target.outOfRange();
     }
 }

@@ -1,9 +1,8 @@
 package dev.odetab.bench;
 
 import dev.odetab.numeric.Format;
-import dev.odetab.numeric.OutOfRange;
 import dev.odetab.numeric.Rational;
-import dev.odetab.numeric.RoundingMode;
+import dev.odetab.numeric.Target;
 import dev.odetab.ode.FunctionDef;
 import dev.odetab.ode.family.Catalog;
 import dev.odetab.tables.Column;
@@ -75,7 +74,7 @@ public final class Workloads {
         for (String c : columns) {
             cols.add(Column.parse(c));
         }
-        return new TableDef("bench", f.name(), f, grid, cols, format, RoundingMode.NEAREST_EVEN, OutOfRange.ERROR, 4096, List.of("csv"));
+        return new TableDef("bench", f.name(), f, grid, cols, Target.nearest(format), 4096, List.of("csv"));
     }
 
     /** Times odetab on the table: {cpu µs/entry on one thread, wall µs/entry on one thread, wall µs/entry on all cores}. */

@@ -46,7 +46,7 @@ class Binary16ExhaustiveTest {
             }
             finite++;
             for (RoundingMode m : RoundingCases.MODES) {
-                Entry e = Rounding.round(d.value(), H, m, null);
+                Entry e = Rounding.round(d.value(), Target.of(H, m));
                 // IEEE 754-2019 §4.3: a representable value is its own rounding in every direction
                 assertEquals(bits, e.bits(), () -> "0x" + Integer.toHexString(bits.intValue()) + " " + m);
                 assertEquals(d.value(), e.value());
@@ -82,11 +82,11 @@ class Binary16ExhaustiveTest {
         }
         // the smallest tie, MIN/2, goes to zero, keeping the sign (§4.3.1, §6.3)
         Rational halfMin = v.get(1).divide(Rational.TWO);
-        Entry minusZero = Rounding.round(halfMin.negate(), H, RoundingMode.NEAREST_EVEN, null);
+        Entry minusZero = Rounding.round(halfMin.negate(), Target.nearest(H));
         assertEquals(Kind.ZERO, minusZero.kind());
         assertEquals(BigInteger.valueOf(0x8000), minusZero.bits());
         assertEquals("-0x0p+0", minusZero.hexLiteral());
-        assertEquals(BigInteger.ZERO, Rounding.round(Rational.ZERO, H, RoundingMode.DOWN, null).bits());
+        assertEquals(BigInteger.ZERO, Rounding.round(Rational.ZERO, Target.of(H, RoundingMode.DOWN)).bits());
         assertEquals(Rational.of(65504), maxFinite); // IEEE 754-2019 table 3.5 binary16: (2 − 2^-10) · 2^15
     }
 
@@ -101,7 +101,7 @@ class Binary16ExhaustiveTest {
             for (Rational y : new Rational[] {mid, mid.add(nudge), mid.subtract(nudge)}) {
                 for (Rational x : new Rational[] {y, y.negate()}) {
                     for (RoundingMode m : RoundingCases.MODES) {
-                        Entry e = Rounding.round(x, H, m, null);
+                        Entry e = Rounding.round(x, Target.of(H, m));
                         assertTrue(RoundingCases.oracleAgrees(x, e, m), () -> m + " " + RoundingCases.full(x));
                     }
                 }
@@ -127,7 +127,7 @@ class Binary16ExhaustiveTest {
         assertEquals(inf.or(sign), bits(Rational.of(-65504).subtract(tiny), RoundingMode.DOWN));
         assertEquals(max.or(sign), bits(Rational.of(-1_000_000), RoundingMode.UP));
         assertEquals(max.or(sign), bits(Rational.of(-1_000_000), RoundingMode.TOWARD_ZERO));
-        Entry e = Rounding.round(threshold, H, RoundingMode.NEAREST_EVEN, null);
+        Entry e = Rounding.round(threshold, Target.nearest(H));
         assertEquals(Kind.INFINITE, e.kind());
         assertEquals(null, e.value());
         assertEquals("INFINITY", e.hexLiteral());
@@ -161,18 +161,18 @@ class Binary16ExhaustiveTest {
 
     private static Entry entryOfBits(IeeeOracle.Decoded d) {
         if (d.value().isZero() && d.negative()) {
-            return Rounding.round(Rational.of(-1, 1 << 30), H, RoundingMode.NEAREST_EVEN, null);
+            return Rounding.round(Rational.of(-1, 1 << 30), Target.nearest(H));
         }
-        return Rounding.round(d.value(), H, RoundingMode.NEAREST_EVEN, null);
+        return Rounding.round(d.value(), Target.nearest(H));
     }
 
     private static Rational value(Rational x, RoundingMode m) {
-        Entry e = Rounding.round(x, H, m, null);
+        Entry e = Rounding.round(x, Target.of(H, m));
         assertFalse(e.kind() == Kind.INFINITE, () -> "unexpected infinity for " + x);
         return e.value();
     }
 
     private static BigInteger bits(Rational x, RoundingMode m) {
-        return Rounding.round(x, H, m, null).bits();
+        return Rounding.round(x, Target.of(H, m)).bits();
     }
 }

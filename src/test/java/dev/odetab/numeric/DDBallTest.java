@@ -95,11 +95,11 @@ class DDBallTest {
             float r32 = b.roundBinary32();
             for (Rational p : points(b)) {
                 if (!Double.isNaN(r64)) {
-                    Entry e = Rounding.round(p, Format.BinaryFormat.BINARY64, RoundingMode.NEAREST_EVEN, null);
+                    Entry e = Rounding.round(p, Target.nearest(Format.BinaryFormat.BINARY64));
                     assertEquals(exact(r64), e.value(), "binary64 of " + b + " at " + p);
                 }
                 if (!Float.isNaN(r32)) {
-                    Entry e = Rounding.round(p, Format.BinaryFormat.BINARY32, RoundingMode.NEAREST_EVEN, null);
+                    Entry e = Rounding.round(p, Target.nearest(Format.BinaryFormat.BINARY32));
                     assertEquals(exact(r32), e.value(), "binary32 of " + b + " at " + p);
                 }
             }

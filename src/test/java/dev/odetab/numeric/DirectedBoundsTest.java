@@ -26,10 +26,10 @@ class DirectedBoundsTest {
             Rational x = values.next();
             String what = "[test.seed=" + seed + ", case " + i + "] x = " + RoundingCases.full(x);
             for (Format f : FORMATS) {
-                Entry down = Rounding.round(x, f, RoundingMode.DOWN, OutOfRange.ERROR);
-                Entry up = Rounding.round(x, f, RoundingMode.UP, OutOfRange.ERROR);
-                Entry zero = Rounding.round(x, f, RoundingMode.TOWARD_ZERO, OutOfRange.ERROR);
-                Entry nearest = Rounding.round(x, f, RoundingMode.NEAREST_EVEN, OutOfRange.ERROR);
+                Entry down = Rounding.round(x, Target.of(f, RoundingMode.DOWN));
+                Entry up = Rounding.round(x, Target.of(f, RoundingMode.UP));
+                Entry zero = Rounding.round(x, Target.of(f, RoundingMode.TOWARD_ZERO));
+                Entry nearest = Rounding.round(x, Target.nearest(f));
                 String w = what + " " + f.name();
                 assertTrue(atMost(down, x), w);
                 assertTrue(atLeast(up, x), w);
@@ -45,7 +45,7 @@ class DirectedBoundsTest {
                 }
                 if (f == BinaryFormat.BINARY128) {
                     for (RoundingMode m : RoundingCases.MODES) {
-                        Entry e = Rounding.round(x, f, m, null);
+                        Entry e = Rounding.round(x, Target.of(f, m));
                         assertTrue(RoundingCases.oracleAgrees(x, e, m), w + " " + m);
                     }
                 }

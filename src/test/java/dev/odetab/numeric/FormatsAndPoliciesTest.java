@@ -97,18 +97,18 @@ class FormatsAndPoliciesTest {
         // unsigned u32.24: a small negative value rounds to 0 in nearest and toward zero, out of range DOWN
         FixedFormat u = new FixedFormat(false, 32, 24);
         Rational tinyNegative = Rational.of(-1, 1 << 26);
-        assertEquals(Kind.ZERO, Rounding.round(tinyNegative, u, RoundingMode.NEAREST_EVEN, OutOfRange.ERROR).kind());
-        assertEquals(Kind.ZERO, Rounding.round(tinyNegative, u, RoundingMode.UP, OutOfRange.ERROR).kind());
-        Entry under = Rounding.round(tinyNegative, u, RoundingMode.DOWN, OutOfRange.ERROR);
+        assertEquals(Kind.ZERO, Rounding.round(tinyNegative, Target.nearest(u)).kind());
+        assertEquals(Kind.ZERO, Rounding.round(tinyNegative, Target.of(u, RoundingMode.UP)).kind());
+        Entry under = Rounding.round(tinyNegative, Target.of(u, RoundingMode.DOWN));
         assertEquals(Kind.OUT_OF_RANGE, under.kind());
         assertTrue(under.negative());
-        assertEquals(Kind.SATURATED, Rounding.round(Rational.of(-5), u, RoundingMode.NEAREST_EVEN, OutOfRange.SATURATE).kind());
-        Entry top = Rounding.round(Rational.of(256), u, RoundingMode.NEAREST_EVEN, OutOfRange.SATURATE);
+        assertEquals(Kind.SATURATED, Rounding.round(Rational.of(-5), new Target(u, RoundingMode.NEAREST_EVEN, OutOfRange.SATURATE)).kind());
+        Entry top = Rounding.round(Rational.of(256), new Target(u, RoundingMode.NEAREST_EVEN, OutOfRange.SATURATE));
         assertEquals(BigInteger.ONE.shiftLeft(32).subtract(BigInteger.ONE), top.fixedInteger());
         // u8.0: 254.5 -> 254 (even), 255.5 -> 256 (even) is out of range
         FixedFormat u8 = new FixedFormat(false, 8, 0);
-        assertEquals(BigInteger.valueOf(254), Rounding.round(Rational.of(509, 2), u8, RoundingMode.NEAREST_EVEN, OutOfRange.ERROR).fixedInteger());
-        assertEquals(Kind.OUT_OF_RANGE, Rounding.round(Rational.of(511, 2), u8, RoundingMode.NEAREST_EVEN, OutOfRange.ERROR).kind());
+        assertEquals(BigInteger.valueOf(254), Rounding.round(Rational.of(509, 2), Target.nearest(u8)).fixedInteger());
+        assertEquals(Kind.OUT_OF_RANGE, Rounding.round(Rational.of(511, 2), Target.nearest(u8)).kind());
     }
 
     @Test
@@ -116,34 +116,34 @@ class FormatsAndPoliciesTest {
         // 2/3 = 0.666666..., by hand
         DecimalFormat five = new DecimalFormat(5);
         Rational twoThirds = Rational.of(2, 3);
-        assertEquals("0.66667", Rounding.round(twoThirds, five, RoundingMode.NEAREST_EVEN, null).decimalText());
-        assertEquals("0.66666", Rounding.round(twoThirds, five, RoundingMode.DOWN, null).decimalText());
-        assertEquals("-0.66667", Rounding.round(twoThirds.negate(), five, RoundingMode.DOWN, null).decimalText());
-        assertEquals("-0.66666", Rounding.round(twoThirds.negate(), five, RoundingMode.TOWARD_ZERO, null).decimalText());
-        assertEquals("1.24e+4", Rounding.round(Rational.of(12350), new DecimalFormat(3), RoundingMode.NEAREST_EVEN, null).decimalText());
-        assertEquals("1.000", Rounding.round(Rational.ONE, new DecimalFormat(4), RoundingMode.UP, null).decimalText());
+        assertEquals("0.66667", Rounding.round(twoThirds, Target.nearest(five)).decimalText());
+        assertEquals("0.66666", Rounding.round(twoThirds, Target.of(five, RoundingMode.DOWN)).decimalText());
+        assertEquals("-0.66667", Rounding.round(twoThirds.negate(), Target.of(five, RoundingMode.DOWN)).decimalText());
+        assertEquals("-0.66666", Rounding.round(twoThirds.negate(), Target.of(five, RoundingMode.TOWARD_ZERO)).decimalText());
+        assertEquals("1.24e+4", Rounding.round(Rational.of(12350), Target.nearest(new DecimalFormat(3))).decimalText());
+        assertEquals("1.000", Rounding.round(Rational.ONE, Target.of(new DecimalFormat(4), RoundingMode.UP)).decimalText());
     }
 
     @Test
     void doubleDoubleOfOneThird() {
         Rational third = Rational.of(1, 3);
-        Entry dd = Rounding.round(third, DoubleDouble.INSTANCE, RoundingMode.NEAREST_EVEN, null);
+        Entry dd = Rounding.round(third, Target.nearest(DoubleDouble.INSTANCE));
         // JLS §15.17.2: double division is IEEE 754 round to nearest, so 1.0 / 3.0 is RN(1/3)
         assertEquals(Double.doubleToRawLongBits(1.0 / 3.0), dd.hi().bits().longValue());
         Rational ulpHi = ExactValues.exact(Math.ulp(1.0 / 3.0));
         assertTrue(dd.lo().value().abs().compareTo(ulpHi.divide(Rational.TWO)) <= 0);
         assertEquals(dd.hi().value().add(dd.lo().value()), dd.value());
-        Entry down = Rounding.round(third, DoubleDouble.INSTANCE, RoundingMode.DOWN, null);
-        Entry up = Rounding.round(third, DoubleDouble.INSTANCE, RoundingMode.UP, null);
+        Entry down = Rounding.round(third, Target.of(DoubleDouble.INSTANCE, RoundingMode.DOWN));
+        Entry up = Rounding.round(third, Target.of(DoubleDouble.INSTANCE, RoundingMode.UP));
         assertTrue(down.value().compareTo(third) < 0 && third.compareTo(up.value()) < 0);
         // 1 + 2^-60 is exactly hi = 1, lo = 2^-60
-        Entry exact = Rounding.round(Rational.ONE.add(Rational.TWO.pow(-60)), DoubleDouble.INSTANCE, RoundingMode.UP, null);
+        Entry exact = Rounding.round(Rational.ONE.add(Rational.TWO.pow(-60)), Target.of(DoubleDouble.INSTANCE, RoundingMode.UP));
         assertEquals("0x1p+0", exact.hi().hexLiteral());
         assertEquals("0x1p-60", exact.lo().hexLiteral());
         // overflow follows binary64 (IEEE 754-2019 §7.4): nearest to infinity, DOWN to the largest finite value
         Rational huge = Rational.TWO.pow(1024);
-        assertEquals(Kind.INFINITE, Rounding.round(huge, DoubleDouble.INSTANCE, RoundingMode.NEAREST_EVEN, null).kind());
-        Entry capped = Rounding.round(huge, DoubleDouble.INSTANCE, RoundingMode.DOWN, null);
+        assertEquals(Kind.INFINITE, Rounding.round(huge, Target.nearest(DoubleDouble.INSTANCE)).kind());
+        Entry capped = Rounding.round(huge, Target.of(DoubleDouble.INSTANCE, RoundingMode.DOWN));
         assertEquals(ExactValues.exact(Double.MAX_VALUE), capped.value());
         assertEquals(Kind.ZERO, capped.lo().kind());
     }
@@ -153,28 +153,28 @@ class FormatsAndPoliciesTest {
         BinaryFormat b64 = BinaryFormat.BINARY64;
         // 1 + 2^-53 is the tie between 1 and 1 + 2^-52 (exact decimal)
         BigDecimal tie = new BigDecimal(ExactValues.exact(1.0).add(Rational.TWO.pow(-53)).toBigDecimalExact().toString());
-        Optional<Entry> straddle = Rounding.decide(Ball.of(tie, new BigDecimal("1e-30")), b64, RoundingMode.NEAREST_EVEN, null);
+        Optional<Entry> straddle = Rounding.decide(Ball.of(tie, new BigDecimal("1e-30")), Target.nearest(b64));
         assertTrue(straddle.isEmpty());
-        Optional<Entry> exactTie = Rounding.decide(Ball.exact(tie), b64, RoundingMode.NEAREST_EVEN, null);
+        Optional<Entry> exactTie = Rounding.decide(Ball.exact(tie), Target.nearest(b64));
         assertEquals(Double.doubleToRawLongBits(1.0), exactTie.orElseThrow().bits().longValue()); // even neighbour
         assertEquals(Double.doubleToRawLongBits(Math.nextUp(1.0)),
-                Rounding.decide(Ball.exact(tie), b64, RoundingMode.UP, null).orElseThrow().bits().longValue());
+                Rounding.decide(Ball.exact(tie), Target.of(b64, RoundingMode.UP)).orElseThrow().bits().longValue());
         Ball third = Ball.ONE.divide(Ball.exact(3), 200);
         assertEquals(Double.doubleToRawLongBits(1.0 / 3.0), // JLS §15.17.2
-                Rounding.decide(third, b64, RoundingMode.NEAREST_EVEN, null).orElseThrow().bits().longValue());
-        assertEquals(Rounding.round(Rational.of(1, 3), DoubleDouble.INSTANCE, RoundingMode.NEAREST_EVEN, null),
-                Rounding.decide(third, DoubleDouble.INSTANCE, RoundingMode.NEAREST_EVEN, null).orElseThrow());
-        assertTrue(Rounding.decide(Ball.ONE.divide(Ball.exact(3), 60), DoubleDouble.INSTANCE, RoundingMode.NEAREST_EVEN, null).isEmpty());
+                Rounding.decide(third, Target.nearest(b64)).orElseThrow().bits().longValue());
+        assertEquals(Rounding.round(Rational.of(1, 3), Target.nearest(DoubleDouble.INSTANCE)),
+                Rounding.decide(third, Target.nearest(DoubleDouble.INSTANCE)).orElseThrow());
+        assertTrue(Rounding.decide(Ball.ONE.divide(Ball.exact(3), 60), Target.nearest(DoubleDouble.INSTANCE)).isEmpty());
         // a ball around zero: -0 and +0 differ in binary64; fixed point has one zero
         Ball aroundZero = Ball.of(BigDecimal.ZERO, new BigDecimal("1e-400"));
-        assertTrue(Rounding.decide(aroundZero, b64, RoundingMode.NEAREST_EVEN, null).isEmpty());
-        assertEquals(BigInteger.ZERO, Rounding.decide(aroundZero, S16_15, RoundingMode.NEAREST_EVEN, OutOfRange.ERROR).orElseThrow().fixedInteger());
+        assertTrue(Rounding.decide(aroundZero, Target.nearest(b64)).isEmpty());
+        assertEquals(BigInteger.ZERO, Rounding.decide(aroundZero, Target.nearest(S16_15)).orElseThrow().fixedInteger());
         // wholly above the fixed-point range: decided, and flagged
         Ball above = Ball.of(new BigDecimal("3"), new BigDecimal("0.5"));
-        assertEquals(Kind.SATURATED, Rounding.decide(above, S16_15, RoundingMode.NEAREST_EVEN, OutOfRange.SATURATE).orElseThrow().kind());
+        assertEquals(Kind.SATURATED, Rounding.decide(above, new Target(S16_15, RoundingMode.NEAREST_EVEN, OutOfRange.SATURATE)).orElseThrow().kind());
     }
 
     private static Entry fixed(Rational x, RoundingMode m, OutOfRange policy) {
-        return Rounding.round(x, S16_15, m, policy);
+        return Rounding.round(x, new Target(S16_15, m, policy));
     }
 }

@@ -49,10 +49,10 @@ class RandomRoundingTest {
             String what = "[test.seed=" + seed + ", case " + i + "] x = " + text;
             BigDecimal bd = new BigDecimal(text);
 
-            Entry d = Rounding.round(x, BinaryFormat.BINARY64, RoundingMode.NEAREST_EVEN, null);
+            Entry d = Rounding.round(x, Target.nearest(BinaryFormat.BINARY64));
             double jdkDouble = bd.doubleValue();
             assertEquals(Double.doubleToRawLongBits(jdkDouble), d.bits().longValue(), what);
-            Entry f = Rounding.round(x, BinaryFormat.BINARY32, RoundingMode.NEAREST_EVEN, null);
+            Entry f = Rounding.round(x, Target.nearest(BinaryFormat.BINARY32));
             float jdkFloat = bd.floatValue();
             assertEquals(Float.floatToRawIntBits(jdkFloat), f.bits().intValue(), what);
 
@@ -64,7 +64,7 @@ class RandomRoundingTest {
             if (i % oracleEvery == 0) {
                 for (RoundingMode m : RoundingCases.MODES) {
                     for (BinaryFormat b : new BinaryFormat[] {BinaryFormat.BINARY64, BinaryFormat.BINARY32}) {
-                        Entry e = Rounding.round(x, b, m, null);
+                        Entry e = Rounding.round(x, Target.of(b, m));
                         assertTrue(RoundingCases.oracleAgrees(x, e, m), () -> what + " " + b.name() + " " + m);
                     }
                 }
@@ -81,10 +81,10 @@ class RandomRoundingTest {
     }
 
     private static void checkDirected64(Rational x, String what) {
-        double down = bitsToDouble(Rounding.round(x, BinaryFormat.BINARY64, RoundingMode.DOWN, null));
-        double up = bitsToDouble(Rounding.round(x, BinaryFormat.BINARY64, RoundingMode.UP, null));
-        double zero = bitsToDouble(Rounding.round(x, BinaryFormat.BINARY64, RoundingMode.TOWARD_ZERO, null));
-        double nearest = bitsToDouble(Rounding.round(x, BinaryFormat.BINARY64, RoundingMode.NEAREST_EVEN, null));
+        double down = bitsToDouble(Rounding.round(x, Target.of(BinaryFormat.BINARY64, RoundingMode.DOWN)));
+        double up = bitsToDouble(Rounding.round(x, Target.of(BinaryFormat.BINARY64, RoundingMode.UP)));
+        double zero = bitsToDouble(Rounding.round(x, Target.of(BinaryFormat.BINARY64, RoundingMode.TOWARD_ZERO)));
+        double nearest = bitsToDouble(Rounding.round(x, Target.nearest(BinaryFormat.BINARY64)));
         boolean exact = Double.doubleToRawLongBits(down) == Double.doubleToRawLongBits(up);
         if (!exact) {
             assertEquals(Double.doubleToRawLongBits(Math.nextUp(down)), Double.doubleToRawLongBits(up), what);
@@ -94,8 +94,8 @@ class RandomRoundingTest {
     }
 
     private static void checkDirected32(Rational x, String what) {
-        float down = Float.intBitsToFloat(Rounding.round(x, BinaryFormat.BINARY32, RoundingMode.DOWN, null).bits().intValue());
-        float up = Float.intBitsToFloat(Rounding.round(x, BinaryFormat.BINARY32, RoundingMode.UP, null).bits().intValue());
+        float down = Float.intBitsToFloat(Rounding.round(x, Target.of(BinaryFormat.BINARY32, RoundingMode.DOWN)).bits().intValue());
+        float up = Float.intBitsToFloat(Rounding.round(x, Target.of(BinaryFormat.BINARY32, RoundingMode.UP)).bits().intValue());
         if (Float.floatToRawIntBits(down) != Float.floatToRawIntBits(up)) {
             assertEquals(Float.floatToRawIntBits(Math.nextUp(down)), Float.floatToRawIntBits(up), what);
         }
@@ -121,7 +121,7 @@ class RandomRoundingTest {
         if (d.kind() == Kind.INFINITE) {
             return;
         }
-        Entry back = Rounding.round(Rational.of(new BigDecimal(s)), BinaryFormat.BINARY64, RoundingMode.NEAREST_EVEN, null);
+        Entry back = Rounding.round(Rational.of(new BigDecimal(s)), Target.nearest(BinaryFormat.BINARY64));
         if (d.kind() == Kind.FINITE) {
             assertEquals(d.bits(), back.bits(), what + " " + s);
             // Double.toString reads back to the same double (Java SE API), so it is never shorter than the shortest

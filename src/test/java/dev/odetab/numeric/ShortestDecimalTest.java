@@ -20,7 +20,7 @@ class ShortestDecimalTest {
 
     /** The definition: m·10^k for the largest feasible k, m nearest to v/10^k within the interval. */
     private static String definition(double d, Format.BinaryFormat f) {
-        Entry e = Rounding.round(Rational.ofDouble(d), f, RoundingMode.NEAREST_EVEN, null);
+        Entry e = Rounding.round(Rational.ofDouble(d), Target.nearest(f));
         Rational v = e.value().abs();
         double next = f == Format.BinaryFormat.BINARY64 ? Math.nextUp(Math.abs(d)) : Math.nextUp((float) Math.abs(d));
         // Above the largest finite value, the next step is one ulp as if the exponent range went on (§4.3.1 overflow rule).
@@ -68,7 +68,7 @@ class ShortestDecimalTest {
                 if (x == 0 || Double.isInfinite(x)) {
                     continue;
                 }
-                String s = Rounding.round(Rational.ofDouble(x), f, RoundingMode.NEAREST_EVEN, null).shortestDecimal();
+                String s = Rounding.round(Rational.ofDouble(x), Target.nearest(f)).shortestDecimal();
                 double back = f == Format.BinaryFormat.BINARY64 ? Double.parseDouble(s) : Float.parseFloat(s);
                 assertEquals(x, back, "read back of " + s);
                 assertEquals(new BigDecimal(definition(x, f)).compareTo(new BigDecimal(s)), 0, f.name() + " " + x + ": " + s);

@@ -5,9 +5,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.odetab.numeric.Entry;
 import dev.odetab.numeric.Format;
-import dev.odetab.numeric.OutOfRange;
 import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.RoundingMode;
+import dev.odetab.numeric.Target;
 import dev.odetab.ode.FunctionDef;
 import dev.odetab.ode.family.Airy;
 import dev.odetab.tables.Column;
@@ -30,8 +30,7 @@ import org.junit.jupiter.api.Test;
 class AiryRoundingTest {
     private static TableResult table(FunctionDef f, Format format, RoundingMode mode) throws Exception {
         Grid grid = new Grid.Uniform(Rational.of(-30), Rational.of(15), Rational.of(9, 100));
-        return TableEvaluator.evaluate(new TableDef("airy", f.name(), f, grid, List.of(Column.parse("value"), Column.parse("derivative")),
-                format, mode, OutOfRange.ERROR, 8192, List.of("csv")));
+        return TableEvaluator.evaluate(new TableDef("airy", f.name(), f, grid, List.of(Column.parse("value"), Column.parse("derivative")), Target.of(format, mode), 8192, List.of("csv")));
     }
 
     @Test

@@ -7,9 +7,9 @@ import dev.odetab.expr.ExprParser;
 import dev.odetab.expr.Poly;
 import dev.odetab.numeric.Entry;
 import dev.odetab.numeric.Format;
-import dev.odetab.numeric.OutOfRange;
 import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.RoundingMode;
+import dev.odetab.numeric.Target;
 import dev.odetab.ode.Equation;
 import dev.odetab.ode.FunctionDef;
 import java.math.BigDecimal;
@@ -71,8 +71,8 @@ class ExactRoundingTest {
                     }
                     BigDecimal exactDecimal = v.toBigDecimalExact();
                     for (RoundingMode mode : new RoundingMode[] {RoundingMode.NEAREST_EVEN}) {
-                        Entry e64 = FunctionEvaluator.entry(f, x, false, Format.BinaryFormat.BINARY64, mode, OutOfRange.ERROR, 256).entry();
-                        Entry e32 = FunctionEvaluator.entry(f, x, false, Format.BinaryFormat.BINARY32, mode, OutOfRange.ERROR, 256).entry();
+                        Entry e64 = FunctionEvaluator.entry(f, x, false, Target.of(Format.BinaryFormat.BINARY64, mode), 256).entry();
+                        Entry e32 = FunctionEvaluator.entry(f, x, false, Target.of(Format.BinaryFormat.BINARY32, mode), 256).entry();
                         String what = "P" + n + "(" + x + ") = " + exactDecimal.toPlainString();
                         assertEquals(Double.doubleToRawLongBits(exactDecimal.doubleValue()), e64.bits().longValue(), what + " binary64");
                         assertEquals(Float.floatToRawIntBits(exactDecimal.floatValue()), e32.bits().intValue(), what + " binary32");
@@ -94,7 +94,7 @@ class ExactRoundingTest {
         // P_2(1/2) = −1/8 exactly (DLMF 18.5.5: P_2 = (3x² − 1)/2): every mode must give −1/8 itself.
         FunctionDef f = legendre(2);
         for (RoundingMode mode : RoundingMode.values()) {
-            Entry e = FunctionEvaluator.entry(f, Rational.of(1, 2), false, Format.BinaryFormat.BINARY64, mode, OutOfRange.ERROR, 256).entry();
+            Entry e = FunctionEvaluator.entry(f, Rational.of(1, 2), false, Target.of(Format.BinaryFormat.BINARY64, mode), 256).entry();
             assertEquals(Rational.of(-1, 8), e.value(), mode.spelling());
         }
     }

@@ -3,9 +3,8 @@ package dev.odetab.series;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import dev.odetab.numeric.Format;
-import dev.odetab.numeric.OutOfRange;
 import dev.odetab.numeric.Rational;
-import dev.odetab.numeric.RoundingMode;
+import dev.odetab.numeric.Target;
 import dev.odetab.ode.FunctionDef;
 import dev.odetab.ode.family.HermiteFunction;
 import dev.odetab.ode.family.Weber;
@@ -24,8 +23,7 @@ class LargeArgumentTest {
     private static final long P = 90;
 
     private static void same(BigDecimal reference, FunctionDef f, String x, boolean derivative) throws Exception {
-        var e = FunctionEvaluator.entry(f, Rational.parse(x), derivative, Format.BinaryFormat.BINARY64, RoundingMode.NEAREST_EVEN,
-                OutOfRange.ERROR, 1 << 14).entry();
+        var e = FunctionEvaluator.entry(f, Rational.parse(x), derivative, Target.nearest(Format.BinaryFormat.BINARY64), 1 << 14).entry();
         assertEquals(Double.doubleToRawLongBits(reference.doubleValue()), e.bits().longValue(), f.name() + " at " + x + (derivative ? " (derivative)" : ""));
     }
 

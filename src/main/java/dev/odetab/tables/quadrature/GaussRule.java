@@ -258,11 +258,11 @@ public final class GaussRule {
     }
 
     private static Entry round(TableDef t, Rational exact) {
-        return Rounding.round(exact, t.format(), t.rounding(), t.outOfRange());
+        return Rounding.round(exact, t.target());
     }
 
     private static Optional<Entry> decide(TableDef t, Ball b) {
-        return Rounding.decide(b, t.format(), t.rounding(), t.outOfRange());
+        return Rounding.decide(b, t.target());
     }
 
     /** Exact: the entry is subnormal or zero in a binary format (binary64 thresholds for double-double). */

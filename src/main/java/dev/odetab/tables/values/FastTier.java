@@ -99,7 +99,7 @@ final class FastTier {
                 if (col.isPoint()) {
                     en = decide(first.add(step.multiply(i - s)), t);
                     if (en == null) {
-                        en = Rounding.round(grid.exactPoint(i), t.format(), t.rounding(), t.outOfRange());
+                        en = Rounding.round(grid.exactPoint(i), t.target());
                     }
                 } else {
                     DDBall b = jet[col.order()];
@@ -208,7 +208,7 @@ final class FastTier {
         if (!b.isFinite()) {
             return null;
         }
-        Optional<Entry> en = Rounding.decide(b.toBall(), f, t.rounding(), t.outOfRange());
+        Optional<Entry> en = Rounding.decide(b.toBall(), t.target());
         return en.orElse(null);
     }
 

@@ -179,7 +179,7 @@ public final class ValuesEvaluator {
                     if (col.taylor()) {
                         v = v.divide(factorial(col.order()));
                     }
-                    entries[i - s][c] = checked(t, x, col, Rounding.round(v, t.format(), t.rounding(), t.outOfRange()));
+                    entries[i - s][c] = checked(t, x, col, Rounding.round(v, t.target()));
                 }
             } else {
                 pending.add(i);
@@ -219,7 +219,7 @@ public final class ValuesEvaluator {
                         }
                         b = col.taylor() ? derivs[col.order()].divide(factorial(col.order()), prec) : derivs[col.order()];
                     }
-                    Optional<Entry> en = Rounding.decide(b, t.format(), t.rounding(), t.outOfRange());
+                    Optional<Entry> en = Rounding.decide(b, t.target());
                     if (en.isEmpty()) {
                         decided = false;
                     } else {

@@ -491,7 +491,7 @@ public final class ZeroFinder {
             } else if (col.order() == order) {
                 e = round(Rational.ZERO);
             } else {
-                Optional<Entry> d = Rounding.decide(over.order(col.order()), table.format(), table.rounding(), table.outOfRange());
+                Optional<Entry> d = Rounding.decide(over.order(col.order()), table.target());
                 if (d.isEmpty()) {
                     return Optional.empty();
                 }
@@ -514,8 +514,7 @@ public final class ZeroFinder {
                 e = round(Rational.ZERO);
             } else {
                 try {
-                    FunctionEvaluator.Decided d = FunctionEvaluator.entry(f, q, col.order() == 1, table.format(), table.rounding(),
-                            table.outOfRange(), table.capBits());
+                    FunctionEvaluator.Decided d = FunctionEvaluator.entry(f, q, col.order() == 1, table.target(), table.capBits());
                     maxPrecBits = Math.max(maxPrecBits, d.precBits());
                     e = d.entry();
                 } catch (PrecisionCapException ex) {
@@ -546,7 +545,7 @@ public final class ZeroFinder {
     }
 
     private Entry round(Rational v) {
-        return Rounding.round(v, table.format(), table.rounding(), table.outOfRange());
+        return Rounding.round(v, table.target());
     }
 
     private static boolean isExactZero(Ball b) {

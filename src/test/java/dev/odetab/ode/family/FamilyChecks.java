@@ -6,9 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.odetab.cli.CliRunner;
 import dev.odetab.expr.Poly;
 import dev.odetab.numeric.Format;
-import dev.odetab.numeric.OutOfRange;
 import dev.odetab.numeric.Rational;
-import dev.odetab.numeric.RoundingMode;
+import dev.odetab.numeric.Target;
 import dev.odetab.ode.FunctionDef;
 import dev.odetab.series.FunctionEvaluator;
 import java.math.BigDecimal;
@@ -71,8 +70,7 @@ final class FamilyChecks {
             // print 0.4999…9 in its last places) reaches the correct rounding as the tie it is
             BigDecimal refDecimal = new BigDecimal(ref.toString(true)).round(new MathContext((int) REFERENCE_DIGITS10));
             long expected = Double.doubleToRawLongBits(refDecimal.doubleValue());
-            BigInteger bits = FunctionEvaluator.entry(f, x, false, Format.BinaryFormat.BINARY64, RoundingMode.NEAREST_EVEN,
-                    OutOfRange.ERROR, 4096).entry().bits();
+            BigInteger bits = FunctionEvaluator.entry(f, x, false, Target.nearest(Format.BinaryFormat.BINARY64), 4096).entry().bits();
             assertEquals(expected, bits.longValue(), what + " at x = " + x.toDecimalOrFraction() + ": apfloat " + ref.toString(true)
                     + " = " + Double.longBitsToDouble(expected) + ", odetab " + Double.longBitsToDouble(bits.longValue()));
         }

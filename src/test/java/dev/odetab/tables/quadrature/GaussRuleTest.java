@@ -13,9 +13,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.odetab.numeric.Entry;
 import dev.odetab.numeric.Format;
-import dev.odetab.numeric.OutOfRange;
 import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.RoundingMode;
+import dev.odetab.numeric.Target;
 import dev.odetab.ode.FunctionDef;
 import dev.odetab.ode.family.Catalog;
 import java.math.BigDecimal;
@@ -66,8 +66,7 @@ class GaussRuleTest {
         for (String c : columns.length == 0 ? new String[] {"node", "weight"} : columns) {
             cols.add(Column.quadrature(c));
         }
-        TableDef t = new TableDef("q", kind.family(), f, new Grid.Quadrature(new GaussFamily(kind, n, ra, rb), flush), cols, format, mode,
-                OutOfRange.ERROR, 4096, List.of("csv"));
+        TableDef t = new TableDef("q", kind.family(), f, new Grid.Quadrature(new GaussFamily(kind, n, ra, rb), flush), cols, Target.of(format, mode), 4096, List.of("csv"));
         return TableEvaluator.evaluate(t);
     }
 

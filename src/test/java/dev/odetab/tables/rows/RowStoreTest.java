@@ -21,6 +21,7 @@ import dev.odetab.numeric.OutOfRange;
 import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.Rounding;
 import dev.odetab.numeric.RoundingMode;
+import dev.odetab.numeric.Target;
 import java.math.BigDecimal;
 import java.math.BigInteger;
 import java.util.ArrayList;
@@ -39,7 +40,7 @@ class RowStoreTest {
     private static final Format.FixedFormat S16_15 = new Format.FixedFormat(true, 16, 15);
 
     private static Entry round(Rational v, Format f, OutOfRange policy) {
-        return Rounding.round(v, f, RoundingMode.NEAREST_EVEN, policy);
+        return Rounding.round(v, new Target(f, RoundingMode.NEAREST_EVEN, policy));
     }
 
     private static Entry b64(double d) {
@@ -89,8 +90,7 @@ class RowStoreTest {
 
     private static TableDef table() {
         return new TableDef("t", "f", null, new Grid.Points(List.of(Rational.ZERO)),
-                List.of(Column.parse("x"), Column.parse("value"), Column.parse("derivative")), Format.BinaryFormat.BINARY64,
-                RoundingMode.NEAREST_EVEN, OutOfRange.ERROR, 128, List.of("csv"));
+                List.of(Column.parse("x"), Column.parse("value"), Column.parse("derivative")), Target.nearest(Format.BinaryFormat.BINARY64), 128, List.of("csv"));
     }
 
     private static StoredRows store(List<TableResult.Row> rows, int memoryBytes) {

@@ -9,9 +9,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 
 import dev.odetab.numeric.Format;
-import dev.odetab.numeric.OutOfRange;
 import dev.odetab.numeric.Rational;
-import dev.odetab.numeric.RoundingMode;
+import dev.odetab.numeric.Target;
 import dev.odetab.ode.FunctionDef;
 import dev.odetab.ode.family.HermiteFunction;
 import java.math.BigDecimal;
@@ -34,8 +33,7 @@ class ChebyshevGridTest {
         FunctionDef psi3 = new HermiteFunction().define(Map.of("n", Rational.of(3)));
         for (int kind : new int[] {1, 2}) {
             Grid.Chebyshev grid = new Grid.Chebyshev(kind, 9, Rational.of(-3), Rational.of(5));
-            TableDef t = new TableDef("cheb", "psi3", psi3, grid, List.of(Column.parse("x"), Column.parse("value")),
-                    Format.BinaryFormat.BINARY64, RoundingMode.NEAREST_EVEN, OutOfRange.ERROR, 4096, List.of("csv"));
+            TableDef t = new TableDef("cheb", "psi3", psi3, grid, List.of(Column.parse("x"), Column.parse("value")), Target.nearest(Format.BinaryFormat.BINARY64), 4096, List.of("csv"));
             TableResult r = TableEvaluator.evaluate(t);
             Apfloat pi = ApfloatMath.pi(P);
             for (int i = 0; i < 9; i++) {

@@ -15,6 +15,7 @@ import dev.odetab.numeric.Format;
 import dev.odetab.numeric.OutOfRange;
 import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.RoundingMode;
+import dev.odetab.numeric.Target;
 import dev.odetab.ode.FunctionDef;
 import dev.odetab.ode.family.Catalog;
 import dev.odetab.series.FunctionEvaluator;
@@ -34,8 +35,7 @@ class ChunkedEvaluationTest {
     private static TableDef airy(Format format, RoundingMode mode, String from, String to, String step) throws Exception {
         FunctionDef f = Catalog.lookup("airy-ai").orElseThrow().define(Map.of());
         Grid grid = new Grid.Uniform(Rational.parse(from), Rational.parse(to), Rational.parse(step));
-        return new TableDef("ai", "ai", f, grid, List.of(Column.parse("x"), Column.parse("value"), Column.parse("derivative")),
-                format, mode, OutOfRange.SATURATE, 4096, List.of("csv"));
+        return new TableDef("ai", "ai", f, grid, List.of(Column.parse("x"), Column.parse("value"), Column.parse("derivative")), new Target(format, mode, OutOfRange.SATURATE), 4096, List.of("csv"));
     }
 
     @Test
@@ -66,7 +66,7 @@ class ChunkedEvaluationTest {
                 for (int i = 0; i < r.rows().size(); i += 101) {
                     Rational x = t.grid().exactPoint(i);
                     for (int c = 1; c <= 2; c++) {
-                        Entry expected = FunctionEvaluator.entry(t.function(), x, c == 2, format, mode, OutOfRange.SATURATE, 4096).entry();
+                        Entry expected = FunctionEvaluator.entry(t.function(), x, c == 2, new Target(format, mode, OutOfRange.SATURATE), 4096).entry();
                         assertEquals(expected, r.rows().get(i).entries().get(c), format.name() + " " + mode + " at x = " + x);
                     }
                 }

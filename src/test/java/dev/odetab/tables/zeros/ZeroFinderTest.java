@@ -16,9 +16,9 @@ import dev.odetab.expr.ExprParser;
 import dev.odetab.expr.Poly;
 import dev.odetab.numeric.Entry;
 import dev.odetab.numeric.Format;
-import dev.odetab.numeric.OutOfRange;
 import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.RoundingMode;
+import dev.odetab.numeric.Target;
 import dev.odetab.ode.Equation;
 import dev.odetab.ode.FunctionDef;
 import dev.odetab.ode.family.Airy;
@@ -54,7 +54,7 @@ class ZeroFinderTest {
         for (String c : columns) {
             cols.add(Column.parse(c));
         }
-        return TableEvaluator.evaluate(new TableDef("z", f.name(), f, z, cols, format, mode, OutOfRange.ERROR, capBits, List.of("csv")));
+        return TableEvaluator.evaluate(new TableDef("z", f.name(), f, z, cols, Target.of(format, mode), capBits, List.of("csv")));
     }
 
     private static TableResult zeros(FunctionDef f, String from, String to, boolean ofDerivative, List<String> columns) throws Exception {
