@@ -120,9 +120,7 @@ final class EvalCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new InputError(optionWhere("--format"), e.getMessage());
         }
-        RoundingMode mode = roundingMode();
-        OutOfRange policy = outOfRangePolicy();
-        Target target = new Target(fmt, mode, policy);
+        Target target = new Target(fmt, roundingMode(), outOfRangePolicy());
         for (int i = 0; i < xs.size(); i++) {
             FunctionEvaluator.Decided r;
             try {
