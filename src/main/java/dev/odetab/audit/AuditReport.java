@@ -64,7 +64,7 @@ public final class AuditReport {
         sb.append("  worst entries (index, x, entry, exact, error):\n");
         for (AuditResult.Row r : worst(a)) {
             sb.append(String.format(Locale.ROOT, "    %6d  x = %-14s %-24s %-28s %s ulp%n", r.index(),
-                    r.x().toDecimalOrFraction(), r.item().text(), r.exact().toString(), ulps(r.ulps())));
+                    r.x().toDecimalOrFraction(), r.item().text(), r.exact(), ulps(r.ulps())));
         }
         long beyond = beyondTolerance(a);
         sb.append(beyond == 0
@@ -81,11 +81,11 @@ public final class AuditReport {
 
     /** Heuristic: the per-entry CSV (RFC 4180, header first). */
     public static byte[] csv(AuditResult a) {
-        StringBuilder sb = new StringBuilder("index,x,entry,line,column,exact,error_ulps,error_bound_ulps,absolute_error,relative_error,beyond_tolerance,wrong_sign,wrong_exponent\n");
+        StringBuilder sb = new StringBuilder("index,x,entry,line,column,exact,exact_digits,error_ulps,error_bound_ulps,absolute_error,relative_error,beyond_tolerance,wrong_sign,wrong_exponent\n");
         for (AuditResult.Row r : a.rows()) {
             sb.append(r.index()).append(',').append(r.x().toDecimalOrFraction()).append(',')
                     .append(quote(r.item().text())).append(',').append(r.item().line()).append(',').append(r.item().column())
-                    .append(',').append(r.exact().toString()).append(',').append(ulps(r.ulps())).append(',')
+                    .append(',').append(r.exact()).append(',').append(r.exactDigits()).append(',').append(ulps(r.ulps())).append(',')
                     .append(String.format(Locale.ROOT, "%.3g", r.ulpsRadiusBound())).append(',')
                     .append(String.format(Locale.ROOT, "%.6g", r.absolute())).append(',')
                     .append(String.format(Locale.ROOT, "%.6g", r.relative())).append(',')
@@ -121,7 +121,8 @@ public final class AuditReport {
             e.put("index", r.index());
             e.put("x", r.x().toDecimalOrFraction());
             e.put("entry", r.item().text());
-            e.put("exact", r.exact().toString());
+            e.put("exact", r.exact());
+            e.put("exact_digits", r.exactDigits());
             e.put("error_ulps", round(r.ulps()));
             w.add(e);
         }

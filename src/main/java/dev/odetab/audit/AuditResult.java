@@ -2,7 +2,6 @@ package dev.odetab.audit;
 
 import dev.odetab.numeric.Rational;
 import dev.odetab.tables.TableDef;
-import java.math.BigDecimal;
 import java.util.List;
 
 /**
@@ -26,7 +25,9 @@ public record AuditResult(TableDef table, String column, Entries entries, List<R
      * @param index 0-based position in the file
      * @param x the grid point it stands for
      * @param item the entry as read
-     * @param exact the midpoint of the enclosure of the exact value
+     * @param exact the exact value correctly rounded to {@code exactDigits} significant digits, the most (at
+     *     most {@link Auditor#EXACT_DIGITS}) that its enclosure decides; empty when it decides none
+     * @param exactDigits how many significant digits {@code exact} has
      * @param ulps signed error (entry − exact)/ulp(exact), at the enclosure's midpoint
      * @param ulpsRadiusBound how far the true error can be from {@code ulps} (the enclosure radius in ulps, rounded up)
      * @param absolute entry − exact
@@ -35,7 +36,7 @@ public record AuditResult(TableDef table, String column, Entries entries, List<R
      * @param wrongSign the entry's sign differs from the exact value's
      * @param wrongExponent the entry lies outside [2^e, 2^(e+1)] (or the decimal analogue), e the exponent of the exact value
      */
-    public record Row(int index, Rational x, Entries.Item item, BigDecimal exact, double ulps, double ulpsRadiusBound,
+    public record Row(int index, Rational x, Entries.Item item, String exact, int exactDigits, double ulps, double ulpsRadiusBound,
             double absolute, double relative, boolean beyond, boolean wrongSign, boolean wrongExponent) {
     }
 }

@@ -2,6 +2,7 @@ package dev.odetab.audit;
 
 import dev.odetab.base.ExprException;
 import dev.odetab.numeric.Ball;
+import dev.odetab.numeric.DecimalDigits;
 import dev.odetab.numeric.Format;
 import dev.odetab.numeric.Rational;
 import dev.odetab.series.GridWalk;
@@ -12,7 +13,6 @@ import dev.odetab.base.InputError;
 import dev.odetab.tables.Column;
 import dev.odetab.tables.TableDef;
 import java.math.BigDecimal;
-import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -29,6 +29,9 @@ import java.util.List;
  * error at the enclosure's midpoint, with the enclosure radius in ulps as its bound.
  */
 public final class Auditor {
+    /** The most significant digits the report's exact column shows (fewer when the enclosure decides fewer). */
+    public static final int EXACT_DIGITS = 20;
+
     /** The enclosure radius, in ulps, below which the printed error is settled: 2^−10. */
     static final Rational SETTLED_ULPS = Rational.TWO.pow(-10);
 
@@ -140,7 +143,9 @@ public final class Auditor {
         boolean exactNegative = mid.signum() < 0;
         boolean entryZero = !item.infinite() && item.value().isZero();
         boolean wrongSign = !mid.isZero() && !entryZero && item.negative() != exactNegative;
-        return new AuditResult.Row(index, x, item, b.mid().round(new MathContext(25)), ulps, radius, abs, rel, above,
+        int digits = DecimalDigits.decided(b, EXACT_DIGITS);
+        String exact = digits == 0 ? "" : DecimalDigits.format(DecimalDigits.round(b, digits).orElseThrow(), digits);
+        return new AuditResult.Row(index, x, item, exact, digits, ulps, radius, abs, rel, above,
                 wrongSign, wrongExponent(f, v, mid, item, entryZero));
     }
 

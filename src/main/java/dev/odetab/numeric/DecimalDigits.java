@@ -34,6 +34,21 @@ public final class DecimalDigits {
     }
 
     /**
+     * Rigorous: the most significant digits, at most {@code maxDigits10}, that the ball decides
+     * (its {@link #round} to that many digits exists), or 0 when not even one is decided (a ball
+     * that straddles zero or a rounding boundary of every length up to the maximum). The
+     * decimal {@code round(x, d)} then holds the exact value within half a unit in its last digit.
+     */
+    public static int decided(Ball x, int maxDigits10) {
+        for (int d = maxDigits10; d >= 1; d--) {
+            if (round(x, d).isPresent()) {
+                return d;
+            }
+        }
+        return 0;
+    }
+
+    /**
      * Text with exactly {@code digits10} significant digits: plain notation when the decimal
      * exponent e of the leading digit satisfies −5 &lt;= e &lt; digits10, otherwise
      * {@code d.ddd…e±XX}. Zero prints as {@code 0}. Locale-independent.

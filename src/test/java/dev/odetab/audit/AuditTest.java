@@ -119,7 +119,7 @@ class AuditTest {
         List<String> lines = Files.readAllLines(report.resolve("audit.csv"));
         double[] e = new double[lines.size() - 1];
         for (int i = 1; i < lines.size(); i++) {
-            e[i - 1] = Double.parseDouble(lines.get(i).split(",")[6]);
+            e[i - 1] = Double.parseDouble(lines.get(i).split(",")[7]);
         }
         return e;
     }
@@ -191,13 +191,13 @@ class AuditTest {
         double[] e = errors(report);
         assertEquals(clean[3] + 1, e[3], 1e-3);
         assertEquals(clean[10] - 3, e[10], 1e-3);
-        assertEquals("true", row(report, 20)[11], "wrong sign at 20");
+        assertEquals("true", row(report, 20)[12], "wrong sign at 20");
         assertTrue(Math.abs(e[25]) > 1e6 && Math.abs(e[26]) > 1e6, e[25] + " " + e[26]);
-        assertEquals("true", row(report, 30)[12], "wrong exponent at 30");
+        assertEquals("true", row(report, 30)[13], "wrong exponent at 30");
         for (int i = 0; i < N; i++) {
             boolean planted = i == 3 || i == 10 || i == 20 || i == 25 || i == 26 || i == 30;
             assertEquals(planted, Math.abs(e[i]) > 0.5, "entry " + i + ": " + e[i]);
-            assertEquals(planted, row(report, i)[10].equals("true"), "beyond_tolerance at " + i);
+            assertEquals(planted, row(report, i)[11].equals("true"), "beyond_tolerance at " + i);
         }
         assertTrue(r.out().contains("0.5 ulp: 6"), r.out());
         assertTrue(r.out().contains("wrong sign: 1, wrong exponent: 1"), r.out());
