@@ -29,9 +29,10 @@ import picocli.CommandLine.Parameters;
 /** {@code odetab audit SPEC#TABLE FILE}: measure an existing table against the exact values. */
 @Command(name = "audit", mixinStandardHelpOptions = true,
         description = {"Measure how far each entry of an existing table (CSV, or a C or Java array) is from the exact value.",
-            "Errors are in units in the last place of the spec table's format; a summary is printed and a report written",
-            "(audit.csv, summary.json, error.png, error.svg). Exit 1 when an entry is off by more than the tolerance,",
-            "2 for unreadable input."})
+            "Errors are in units in the last place (ulps) of the spec table's format.",
+            "A summary is printed, and a report written: audit.csv, summary.json, error.png and error.svg.",
+            "Exit codes: 0 every entry is within the tolerance; 1 some entry is beyond it;",
+            "2 bad input (unreadable file, unknown table); 3 the precision cap cannot settle an entry."})
 final class AuditCommand implements Callable<Integer> {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;

@@ -43,7 +43,7 @@ final class BuildCommand implements Callable<Integer> {
     @Option(names = "--check", description = "write nothing; exit 1 if any output on disk differs from what would be written")
     boolean check;
 
-    @Option(names = "--jobs", paramLabel = "N", description = "tables evaluated in parallel (default: the number of cores); the bytes never depend on N")
+    @Option(names = "--jobs", paramLabel = "N", description = "threads (default: the number of cores): tables, and the chunks of a long table, run in parallel; the bytes never depend on N")
     Integer jobs;
 
     @Option(names = "--verbose", description = "report the work done per table on stderr")
