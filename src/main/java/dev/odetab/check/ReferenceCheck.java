@@ -3,6 +3,7 @@ package dev.odetab.check;
 import dev.odetab.base.ExprException;
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.BallFunctions;
+import dev.odetab.numeric.IndependentCheck;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.FunctionDef;
 import dev.odetab.ode.family.Catalog;
@@ -34,6 +35,10 @@ import java.util.stream.Stream;
  * enclosure of the exact value (computed with about d + 10 digits). An identity passes when
  * its two sides, both enclosed in ball arithmetic, overlap. "Worst" reports the largest
  * |midpoint − v| in units of the reference's last digit (≤ 0.5 for a correctly rounded reference).
+ *
+ * <p>Last, one heuristic cross-check ({@link IndependentCheck}): the elementary functions of
+ * {@code BallFunctions} against big-math, an independent implementation. A disagreement fails
+ * the check; agreement proves nothing beyond the two implementations agreeing.
  */
 public final class ReferenceCheck {
     private ReferenceCheck() {
@@ -55,7 +60,10 @@ public final class ReferenceCheck {
         }
     }
 
-    /** Every reference file of the folder (sorted by name), then the identities. */
+    /** The precision of the big-math cross-check: well beyond binary128 and decimal:34. */
+    private static final int INDEPENDENT_BITS = 256;
+
+    /** Every reference file of the folder (sorted by name), then the identities, then the big-math cross-check. */
     public static List<Outcome> run(Path dir) throws IOException, DataError {
         List<Outcome> r = new ArrayList<>();
         List<Path> files;
@@ -66,7 +74,26 @@ public final class ReferenceCheck {
             r.add(file(f));
         }
         r.addAll(identities());
+        r.add(independent());
         return r;
+    }
+
+    /**
+     * Heuristic: π, e, exp, log, √, ∛ and Γ at fixed rational points, our enclosures against
+     * big-math's values; "worst" is how far big-math's value lies outside our ball, in units of
+     * its last digit (0 when every ball contains it).
+     */
+    static Outcome independent() {
+        List<String> failures = new ArrayList<>();
+        double worst = 0;
+        List<IndependentCheck.Outcome> all = IndependentCheck.standard(INDEPENDENT_BITS);
+        for (IndependentCheck.Outcome o : all) {
+            worst = Math.max(worst, o.units());
+            if (!o.agrees()) {
+                failures.add(o.label() + ": ours " + o.ours() + ", big-math " + o.theirs());
+            }
+        }
+        return new Outcome("cross-check of BallFunctions", "big-math 2.3.2, an independent implementation", all.size(), failures, worst);
     }
 
     /** One row of a reference file. */
