@@ -1,102 +1,172 @@
 package dev.odetab.arch;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.HashMap;
-import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.TreeMap;
 import java.util.TreeSet;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
+import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.tomlj.Toml;
+import org.tomlj.TomlArray;
+import org.tomlj.TomlParseResult;
+import org.tomlj.TomlTable;
 
 /**
- * The dependency rule of STYLE.md, read from the import statements of the main sources:
- * {@code cli → spec, tables, emit, audit → series → ode → expr → numeric}; no package
- * imports one of a higher layer, packages of one layer form no cycle, big-math is imported
- * only inside {@code numeric} and the progress bar library only inside {@code cli}.
+ * The architecture stated in {@code architecture.toml} (the one statement of it; DEVELOPERS.md
+ * describes it in prose) against the main sources: every package is declared and documented,
+ * every reference between packages is declared in the referring package's {@code uses}, no
+ * forbidden edge appears, the packages form no cycle, and every third-party library is
+ * referenced only inside its packages, and by at least one of them.
+ *
+ * <p>References are imports and qualified names ({@code dev.odetab.x.Y}) in code, with
+ * comments removed; a sub-package ({@code tables.rows}) counts as its top-level package.
  */
 class ArchitectureTest {
     private static final Path ROOT = Path.of("src/main/java/dev/odetab");
-    private static final Map<String, Integer> LAYER = Map.ofEntries(
-            Map.entry("base", 0), Map.entry("numeric", 1), Map.entry("expr", 2), Map.entry("ode", 3), Map.entry("series", 4),
-            Map.entry("spec", 5), Map.entry("tables", 5), Map.entry("emit", 5), Map.entry("audit", 5), Map.entry("check", 5),
-            Map.entry("cli", 6));
-    private static final Pattern IMPORT = Pattern.compile("^import (?:static )?dev\\.odetab\\.([a-z]+)\\.", Pattern.MULTILINE);
+    private static final Pattern REFERENCE = Pattern.compile("\\bdev\\.odetab\\.([a-z]+)\\.");
+    private static final Pattern COMMENT = Pattern.compile("/\\*.*?\\*/|//[^\\n]*", Pattern.DOTALL);
 
-    private static Map<String, Set<String>> edges() throws IOException {
-        Map<String, Set<String>> edges = new HashMap<>();
+    private static TomlParseResult architecture;
+    /** Source file (relative to ROOT) to its code without comments and package line. */
+    private static Map<Path, String> sources;
+
+    @BeforeAll
+    static void read() throws IOException {
+        architecture = Toml.parse(Path.of("architecture.toml"));
+        assertEquals(List.of(), architecture.errors(), "architecture.toml does not parse");
+        sources = new TreeMap<>();
         try (Stream<Path> files = Files.walk(ROOT)) {
             for (Path p : files.filter(f -> f.toString().endsWith(".java")).toList()) {
-                String pkg = ROOT.relativize(p).getName(0).toString();
-                Matcher m = IMPORT.matcher(Files.readString(p));
-                while (m.find()) {
-                    if (!m.group(1).equals(pkg)) {
-                        edges.computeIfAbsent(pkg, k -> new TreeSet<>()).add(m.group(1) + " (" + p.getFileName() + ")");
-                    }
-                }
+                String code = COMMENT.matcher(Files.readString(p)).replaceAll(" ");
+                sources.put(ROOT.relativize(p), code.replaceFirst("(?m)^package [^;]*;", ""));
             }
         }
+    }
+
+    private static String packageOf(Path relative) {
+        return relative.getName(0).toString();
+    }
+
+    private static Set<String> declaredPackages() {
+        return new TreeSet<>(architecture.getTableOrEmpty("packages").keySet());
+    }
+
+    private static Set<String> strings(TomlArray a) {
+        Set<String> out = new TreeSet<>();
+        for (int i = 0; i < a.size(); i++) {
+            out.add(a.getString(i));
+        }
+        return out;
+    }
+
+    private static Set<String> uses(String pkg) {
+        return strings(architecture.getTableOrEmpty("packages").getTableOrEmpty(pkg).getArrayOrEmpty("uses"));
+    }
+
+    /** Package to the packages it references, each with the first file that does. */
+    private static Map<String, Map<String, Path>> edges() {
+        Map<String, Map<String, Path>> edges = new TreeMap<>();
+        sources.forEach((file, code) -> {
+            String from = packageOf(file);
+            Matcher m = REFERENCE.matcher(code);
+            while (m.find()) {
+                if (!m.group(1).equals(from)) {
+                    edges.computeIfAbsent(from, k -> new TreeMap<>()).putIfAbsent(m.group(1), file);
+                }
+            }
+        });
         return edges;
     }
 
     @Test
-    void everyImportPointsDownTheLayers() throws IOException {
-        List<String> wrong = new ArrayList<>();
-        for (Map.Entry<String, Set<String>> e : edges().entrySet()) {
-            assertTrue(LAYER.containsKey(e.getKey()), "package " + e.getKey() + " has no layer in this test");
-            for (String target : e.getValue()) {
-                String pkg = target.substring(0, target.indexOf(' '));
-                if (LAYER.get(pkg) > LAYER.get(e.getKey())) {
-                    wrong.add(e.getKey() + " -> " + target);
-                }
-            }
+    void everyPackageIsDeclaredAndStatesItsInvariant() {
+        Set<String> present = new TreeSet<>();
+        sources.keySet().forEach(p -> present.add(packageOf(p)));
+        present.removeIf(p -> p.endsWith(".java"));
+        assertEquals(declaredPackages(), present, "packages in architecture.toml against src/main");
+        for (String pkg : present) {
+            assertTrue(sources.containsKey(Path.of(pkg, "package-info.java")), pkg + " has no package-info.java");
+            assertFalse(architecture.getTableOrEmpty("packages").getTableOrEmpty(pkg).getString("owns", () -> "").isBlank(),
+                    pkg + " says in architecture.toml what it owns");
         }
-        assertEquals(List.of(), wrong, "imports against the layering");
     }
 
     @Test
-    void noCycleBetweenPackages() throws IOException {
-        Map<String, Set<String>> graph = new HashMap<>();
-        edges().forEach((k, v) -> v.forEach(t -> graph.computeIfAbsent(k, x -> new HashSet<>()).add(t.substring(0, t.indexOf(' ')))));
-        for (String start : graph.keySet()) {
-            Set<String> seen = new HashSet<>();
-            List<String> stack = new ArrayList<>(graph.getOrDefault(start, Set.of()));
+    void everyReferenceIsDeclared() {
+        List<String> undeclared = new ArrayList<>();
+        edges().forEach((from, targets) -> targets.forEach((to, file) -> {
+            if (!uses(from).contains(to)) {
+                undeclared.add(from + " -> " + to + " (" + file + ")");
+            }
+        }));
+        assertEquals(List.of(), undeclared, "references not declared in architecture.toml");
+    }
+
+    @Test
+    void noForbiddenEdgeIsDeclaredOrPresent() {
+        TomlArray forbidden = architecture.getArrayOrEmpty("forbidden");
+        assertTrue(forbidden.size() > 0, "architecture.toml lists forbidden edges");
+        Map<String, Map<String, Path>> edges = edges();
+        for (int i = 0; i < forbidden.size(); i++) {
+            TomlTable f = forbidden.getTable(i);
+            String from = f.getString("from");
+            String to = f.getString("to");
+            assertTrue(declaredPackages().contains(from) && declaredPackages().contains(to), "forbidden " + from + " -> " + to);
+            assertFalse(f.getString("why", () -> "").isBlank(), "forbidden " + from + " -> " + to + " says why");
+            assertFalse(uses(from).contains(to), "architecture.toml both allows and forbids " + from + " -> " + to);
+            assertFalse(edges.getOrDefault(from, Map.of()).containsKey(to),
+                    "forbidden " + from + " -> " + to + ": " + edges.getOrDefault(from, Map.of()).get(to));
+        }
+    }
+
+    @Test
+    void declaredPackagesFormNoCycle() {
+        for (String start : declaredPackages()) {
+            assertTrue(declaredPackages().containsAll(uses(start)), start + " uses an undeclared package");
+            Set<String> seen = new TreeSet<>();
+            List<String> stack = new ArrayList<>(uses(start));
             while (!stack.isEmpty()) {
                 String n = stack.remove(stack.size() - 1);
-                assertTrue(!n.equals(start), "package cycle through " + start);
+                assertFalse(n.equals(start), "package cycle through " + start);
                 if (seen.add(n)) {
-                    stack.addAll(graph.getOrDefault(n, Set.of()));
-                }
-            }
-        }
-    }
-
-    private static void onlyInside(String library, String pkg) throws IOException {
-        try (Stream<Path> files = Files.walk(ROOT)) {
-            for (Path p : files.filter(f -> f.toString().endsWith(".java")).toList()) {
-                if (Files.readString(p).contains(library)) {
-                    assertEquals(pkg, ROOT.relativize(p).getName(0).toString(), p + " uses " + library);
+                    stack.addAll(uses(n));
                 }
             }
         }
     }
 
     @Test
-    void bigMathOnlyInsideNumeric() throws IOException {
-        onlyInside("ch.obermuhlner", "numeric");
-    }
-
-    @Test
-    void progressBarsOnlyInsideCli() throws IOException {
-        onlyInside("me.tongfei", "cli");
+    void librariesStayInsideTheirPackagesAndAreUsed() {
+        TomlTable libraries = architecture.getTableOrEmpty("libraries");
+        assertTrue(libraries.keySet().contains("big-math"), "big-math is declared");
+        for (String name : libraries.keySet()) {
+            TomlTable lib = libraries.getTableOrEmpty(name);
+            Pattern use = Pattern.compile("\\b" + Pattern.quote(lib.getString("prefix")) + "\\.");
+            Set<String> allowed = strings(lib.getArrayOrEmpty("packages"));
+            List<String> outside = new ArrayList<>();
+            boolean used = false;
+            for (Map.Entry<Path, String> e : sources.entrySet()) {
+                if (use.matcher(e.getValue()).find()) {
+                    used = true;
+                    if (!allowed.contains(packageOf(e.getKey()))) {
+                        outside.add(e.getKey().toString());
+                    }
+                }
+            }
+            assertEquals(List.of(), outside, name + " used outside " + allowed);
+            assertTrue(used, name + " is declared in architecture.toml but used by nothing in src/main");
+        }
     }
 }
