@@ -54,7 +54,7 @@ public final class Auditor {
      */
     public static AuditResult audit(TableDef t, Column column, Entries e, double tolerance)
             throws InputError, ExprException, PrecisionCapException {
-        if (t.grid() instanceof dev.odetab.tables.Grid.Found) {
+        if (t.kind().givenPoints().isEmpty()) {
             throw new InputError(e.source(), "table " + t.name() + " is a zeros or quadrature table, whose points are found, not given;"
                     + " audit compares entries at exact grid points (a values table)");
         }

@@ -1,12 +1,14 @@
 package dev.odetab.audit;
 
 import dev.odetab.base.InputError;
+import dev.odetab.tables.Grid;
 import dev.odetab.tables.TableDef;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 
 /**
@@ -31,7 +33,7 @@ public final class TableReader {
             throw new InputError(display, "cannot read the file: " + e.getMessage());
         }
         if (display.toLowerCase(Locale.ROOT).endsWith(".csv")) {
-            return CsvReader.read(display, text, column, t.format(), t.grid().points());
+            return CsvReader.read(display, text, column, t.format(), t.kind().givenPoints().map(Grid::points).orElse(List.of()));
         }
         if (t.format() instanceof dev.odetab.numeric.Format.DoubleDouble
                 || t.format().equals(dev.odetab.numeric.Format.BinaryFormat.BINARY128)) {

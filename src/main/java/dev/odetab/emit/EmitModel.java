@@ -7,6 +7,7 @@ import dev.odetab.numeric.Rounding;
 import dev.odetab.numeric.Target;
 import dev.odetab.tables.Column;
 import dev.odetab.tables.Grid;
+import dev.odetab.tables.TableKind;
 import dev.odetab.base.Progress;
 import dev.odetab.tables.TableResult;
 import java.util.ArrayList;
@@ -45,7 +46,7 @@ final class EmitModel {
         table.put("function", t.functionName());
         m.put("table", table);
         m.put("provenance", provenance.lines());
-        m.put("grid", grid(t.grid()));
+        m.put("grid", grid(t.kind()));
         List<Map<String, Object>> columns = new ArrayList<>();
         for (int c = 0; c < t.columns().size(); c++) {
             Column col = t.columns().get(c);
@@ -73,9 +74,9 @@ final class EmitModel {
         return m;
     }
 
-    private static Map<String, Object> grid(Grid g) {
+    private static Map<String, Object> grid(TableKind kind) {
         Map<String, Object> m = new LinkedHashMap<>();
-        if (g instanceof Grid.Uniform u) {
+        if (kind.givenPoints().orElse(null) instanceof Grid.Uniform u) {
             m.put("uniform", true);
             m.put("from", constant(u.from()));
             m.put("to", constant(u.to()));
@@ -83,7 +84,7 @@ final class EmitModel {
         } else {
             m.put("uniform", false);
         }
-        m.put("description", g.describe());
+        m.put("description", kind.describe());
         return m;
     }
 

@@ -54,7 +54,7 @@ public record Provenance(String specPath, String specSha256, String table, Strin
         }
         return new Provenance(specPath, Outputs.sha256(specBytes), t.name(), t.functionName() + " (" + name + ")",
                 f.equation().toString(), normalization,
-                r.proof() == null ? t.grid().describe() : t.grid().describe() + "; " + r.proof(), format, t.rounding().spelling() + " (" + t.rounding().direction() + ")",
+                r.proof() == null ? t.kind().describe() : t.kind().describe() + "; " + r.proof(), format, t.rounding().spelling() + " (" + t.rounding().direction() + ")",
                 maxError, toolVersion);
     }
 

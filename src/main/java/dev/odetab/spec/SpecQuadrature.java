@@ -7,7 +7,7 @@ import dev.odetab.numeric.Rational;
 import dev.odetab.ode.FunctionDef;
 import dev.odetab.tables.Column;
 import dev.odetab.tables.quadrature.GaussFamily;
-import dev.odetab.tables.Grid;
+import dev.odetab.tables.TableKind;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -24,7 +24,7 @@ final class SpecQuadrature {
     static final List<String> COLUMNS = List.of("node", "weight", "scaled_weight");
 
     /** The rule and the columns (with {@code weight_flag} after {@code weight} when flushing). */
-    record Parsed(Grid.Quadrature grid, List<Column> columns) {
+    record Parsed(TableKind.Quadrature kind, List<Column> columns) {
     }
 
     private final SpecFile spec;
@@ -64,7 +64,7 @@ final class SpecQuadrature {
             }
             columns.add(w + 1, Column.quadrature("weight_flag"));
         }
-        return new Parsed(new Grid.Quadrature(family, flush), columns);
+        return new Parsed(new TableKind.Quadrature(family, flush), columns);
     }
 
     /** The rule of the function: a family with a Gauss rule, an integer degree n from 1 to the cap. */

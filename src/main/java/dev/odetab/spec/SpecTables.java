@@ -13,6 +13,7 @@ import dev.odetab.ode.family.Catalog;
 import dev.odetab.tables.Column;
 import dev.odetab.tables.Grid;
 import dev.odetab.tables.TableDef;
+import dev.odetab.tables.TableKind;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -112,7 +113,8 @@ final class SpecTables {
         String fname = string(base, t, "function");
         FunctionDef f = function(child(base, "function"), fname);
         boolean quadrature = kind.equals("quadrature");
-        Grid grid = quadrature ? null : kind.equals("zeros") ? zeroSearch(base, t) : grid(base, t);
+        Grid grid = quadrature || kind.equals("zeros") ? null : grid(base, t);
+        TableKind tableKind = kind.equals("zeros") ? zeroSearch(base, t) : null;
         List<Column> columns = quadrature ? null
                 : kind.equals("zeros") && !t.contains("columns") ? List.of(Column.parse("x")) : columns(base, t, terms);
         Format format = Format.BinaryFormat.BINARY64;
@@ -154,9 +156,9 @@ final class SpecTables {
         }
         if (quadrature) {
             SpecQuadrature.Parsed rule = new SpecQuadrature(spec, root).table(base, t, fname, f, format);
-            grid = rule.grid();
+            tableKind = rule.kind();
             columns = rule.columns();
-        } else if (grid.hasIrrationalPoints()) {
+        } else if (grid != null && grid.hasIrrationalPoints()) {
             for (Column c : columns) {
                 if (c.order() >= 2 || c.taylor()) {
                     throw spec.error(child(base, "columns"), "column '" + c.name()
@@ -164,8 +166,11 @@ final class SpecTables {
                 }
             }
         }
-        List<String> outputs = outputs(base, t, javaEntries(grid, columns, format));
-        return new TableDef(name, fname, f, grid, columns, new Target(format, rounding, outOfRange), cap, outputs);
+        if (tableKind == null) {
+            tableKind = terms > 0 ? new TableKind.Taylor(grid, terms) : new TableKind.Values(grid);
+        }
+        List<String> outputs = outputs(base, t, javaEntries(tableKind, columns, format));
+        return new TableDef(name, fname, f, tableKind, columns, new Target(format, rounding, outOfRange), cap, outputs);
     }
 
     private FunctionDef function(List<String> key, String fname) throws InputError {
@@ -247,7 +252,7 @@ final class SpecTables {
         return new Grid.Uniform(from, to, step);
     }
 
-    private Grid zeroSearch(List<String> base, TomlTable t) throws InputError {
+    private TableKind.Zeros zeroSearch(List<String> base, TomlTable t) throws InputError {
         if (t.contains("grid") || t.contains("points")) {
             throw spec.error(child(base, t.contains("grid") ? "grid" : "points"), "a zeros table searches an interval: give 'search' instead of a grid");
         }
@@ -286,7 +291,7 @@ final class SpecTables {
             }
             ofDerivative = of.equals("derivative");
         }
-        return new Grid.ZeroSearch(from, to, count, ofDerivative);
+        return new TableKind.Zeros(from, to, count, ofDerivative);
     }
 
     static final Set<String> CHEBYSHEV_KEYS = new LinkedHashSet<>(List.of("chebyshev", "n", "from", "to"));
@@ -417,8 +422,8 @@ final class SpecTables {
      * and double-double (two arrays per column); a zeros table counts its {@code count}, and
      * 0 when that is not given (the number of zeros is known only after the search).
      */
-    private static long javaEntries(Grid grid, List<Column> columns, Format format) {
-        long rows = grid instanceof Grid.ZeroSearch z ? z.count() : grid.size();
+    private static long javaEntries(TableKind kind, List<Column> columns, Format format) {
+        long rows = kind.rowsBeforeEvaluation();
         int arrays = switch (format.kind()) {
             case DOUBLE_DOUBLE -> 2;
             case BINARY -> format.equals(Format.BinaryFormat.BINARY128) ? 2 : 1;

@@ -1,6 +1,5 @@
 package dev.odetab.tables;
 
-import dev.odetab.tables.quadrature.GaussFamily;
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.BallFunctions;
 import dev.odetab.numeric.Rational;
@@ -12,7 +11,11 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 
-/** The points of a table; a grid never goes through a binary double. */
+/**
+ * The given points of a values or taylor table (from/to/step, Chebyshev nodes, a list); a grid
+ * never goes through a binary double. Kinds whose points are found (zeros, Gauss nodes) have none:
+ * see {@link TableKind}.
+ */
 public sealed interface Grid {
     /**
      * The points in table order, as exact rationals; for a grid with irrational points
@@ -205,53 +208,6 @@ public sealed interface Grid {
             return "Chebyshev nodes of the " + (kind == 1 ? "first" : "second") + " kind, n = " + n + ", on ["
                     + from.toDecimalOrFraction() + ", " + to.toDecimalOrFraction()
                     + "] (irrational nodes: x holds each node correctly rounded)";
-        }
-    }
-
-    /**
-     * Not a grid: the points are found by the evaluation (zeros, nodes of a rule), so there are
-     * none before it, and they are irrational in general: the table holds each correctly rounded.
-     */
-    sealed interface Found extends Grid permits ZeroSearch, Quadrature {
-        @Override
-        default List<Rational> points() {
-            return List.of();
-        }
-
-        @Override
-        default boolean hasIrrationalPoints() {
-            return true;
-        }
-    }
-
-    /**
-     * Not a grid but a search: the zeros of y (or of y' when {@code ofDerivative}) met walking
-     * from {@code from} to {@code to}, at most {@code count} of them (0: all). The points are
-     * found by {@link dev.odetab.tables.zeros.ZeroFinder}; they are irrational in general, so the table holds each zero
-     * correctly rounded.
-     */
-    record ZeroSearch(Rational from, Rational to, int count, boolean ofDerivative) implements Found {
-        @Override
-        public String describe() {
-            return "zeros of " + (ofDerivative ? "y'" : "y") + " met walking from " + from.toDecimalOrFraction() + " to "
-                    + to.toDecimalOrFraction() + " (both ends included)" + (count > 0 ? ", the first " + count : "");
-        }
-    }
-
-    /**
-     * Not a grid but a Gauss rule: its points are the n nodes of the rule, found by
-     * {@link dev.odetab.tables.quadrature.GaussRule}.
-     *
-     * @param family the rule
-     * @param flushUnderflow true when a weight below the format's smallest normal number is
-     *     written as 0 and flagged (weight_underflow = "flush"); false when it is an error
-     */
-    record Quadrature(GaussFamily family, boolean flushUnderflow) implements Found {
-        @Override
-        public String describe() {
-            return family.describe() + "; nodes ascending, each zero of p_" + family.n()
-                    + " proven by interval Newton from an exact center, all " + family.n() + " counted by disjoint enclosures"
-                    + (flushUnderflow ? "; weights below the smallest normal number flushed to 0 and flagged in weight_flag" : "");
         }
     }
 

@@ -11,8 +11,9 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Future;
 
 /**
- * Evaluation of a table of any kind: values tables go to {@link ValuesEvaluator}, zeros tables to
- * {@link ZeroFinder}, quadrature tables to {@link GaussRule}.
+ * Evaluation of a table of any kind: each kind goes to its evaluator ({@link TableKind#evaluate}):
+ * values and taylor tables to {@link ValuesEvaluator}, zeros tables to {@link ZeroFinder},
+ * quadrature tables to {@link GaussRule}.
  */
 public final class TableEvaluator {
     private TableEvaluator() {
@@ -42,20 +43,35 @@ public final class TableEvaluator {
      */
     public static TableResult evaluate(TableDef t, Progress progress, ExecutorService pool)
             throws ExprException, UndecidedException, OutOfRangeException {
-        if (t.grid() instanceof Grid.ZeroSearch z) {
-            // The number of zeros is not known before the search: they are reported when it ends.
-            TableResult zeros = ZeroFinder.find(t, z);
-            progress.start(t.name(), zeros.rows().size());
-            progress.advance(zeros.rows().size());
-            return zeros;
-        }
-        if (t.grid() instanceof Grid.Quadrature q) {
-            TableResult rule = GaussRule.table(t, q);
-            progress.start(t.name(), rule.rows().size());
-            progress.advance(rule.rows().size());
-            return rule;
-        }
-        return ValuesEvaluator.evaluate(t, progress, pool);
+        return t.kind().evaluate(t, new TableKind.Evaluators() {
+            @Override
+            public TableResult values(TableDef table, TableKind.Values kind) throws ExprException, UndecidedException, OutOfRangeException {
+                return ValuesEvaluator.evaluate(table, progress, pool);
+            }
+
+            @Override
+            public TableResult taylor(TableDef table, TableKind.Taylor kind) throws ExprException, UndecidedException, OutOfRangeException {
+                return ValuesEvaluator.evaluate(table, progress, pool);
+            }
+
+            @Override
+            public TableResult zeros(TableDef table, TableKind.Zeros kind) throws ExprException, UndecidedException, OutOfRangeException {
+                // The number of zeros is not known before the search: they are reported when it ends.
+                return reported(ZeroFinder.find(table, kind), progress);
+            }
+
+            @Override
+            public TableResult quadrature(TableDef table, TableKind.Quadrature kind) throws UndecidedException, OutOfRangeException {
+                return reported(GaussRule.table(table, kind), progress);
+            }
+        });
+    }
+
+    /** A table whose rows were all found at once, reported to {@code progress} as such. */
+    private static TableResult reported(TableResult r, Progress progress) {
+        progress.start(r.table().name(), r.rows().size());
+        progress.advance(r.rows().size());
+        return r;
     }
 
     /**

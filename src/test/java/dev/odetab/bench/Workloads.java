@@ -9,6 +9,7 @@ import dev.odetab.tables.Column;
 import dev.odetab.tables.Grid;
 import dev.odetab.base.Progress;
 import dev.odetab.tables.TableDef;
+import dev.odetab.tables.TableKind;
 import dev.odetab.tables.TableEvaluator;
 import dev.odetab.tables.TableResult;
 import java.io.IOException;
@@ -74,7 +75,7 @@ public final class Workloads {
         for (String c : columns) {
             cols.add(Column.parse(c));
         }
-        return new TableDef("bench", f.name(), f, grid, cols, Target.nearest(format), 4096, List.of("csv"));
+        return new TableDef("bench", f.name(), f, new TableKind.Values(grid), cols, Target.nearest(format), 4096, List.of("csv"));
     }
 
     /** Times odetab on the table: {cpu µs/entry on one thread, wall µs/entry on one thread, wall µs/entry on all cores}. */

@@ -13,6 +13,7 @@ import dev.odetab.ode.family.Airy;
 import dev.odetab.tables.Column;
 import dev.odetab.tables.Grid;
 import dev.odetab.tables.TableDef;
+import dev.odetab.tables.TableKind;
 import dev.odetab.tables.TableEvaluator;
 import dev.odetab.tables.TableResult;
 import java.math.BigDecimal;
@@ -30,7 +31,7 @@ import org.junit.jupiter.api.Test;
 class AiryRoundingTest {
     private static TableResult table(FunctionDef f, Format format, RoundingMode mode) throws Exception {
         Grid grid = new Grid.Uniform(Rational.of(-30), Rational.of(15), Rational.of(9, 100));
-        return TableEvaluator.evaluate(new TableDef("airy", f.name(), f, grid, List.of(Column.parse("value"), Column.parse("derivative")), Target.of(format, mode), 8192, List.of("csv")));
+        return TableEvaluator.evaluate(new TableDef("airy", f.name(), f, new TableKind.Values(grid), List.of(Column.parse("value"), Column.parse("derivative")), Target.of(format, mode), 8192, List.of("csv")));
     }
 
     @Test

@@ -5,6 +5,7 @@ import dev.odetab.tables.Grid;
 import dev.odetab.tables.OutOfRangeException;
 import dev.odetab.tables.TableDef;
 import dev.odetab.tables.TableEvaluator;
+import dev.odetab.tables.TableKind;
 import dev.odetab.tables.TableResult;
 import dev.odetab.tables.UndecidedException;
 import dev.odetab.numeric.Ball;
@@ -103,7 +104,7 @@ public final class GaussRule {
      * @throws UndecidedException when the precision cap cannot decide a row or separate the nodes
      * @throws OutOfRangeException when a weight underflows (policy "error") or a fixed-point entry is out of range
      */
-    public static TableResult table(TableDef t, Grid.Quadrature q)
+    public static TableResult table(TableDef t, TableKind.Quadrature q)
             throws UndecidedException, OutOfRangeException {
         GaussFamily f = q.family();
         int n = f.n();
@@ -158,7 +159,7 @@ public final class GaussRule {
     }
 
     /** Ziv's loop for one source: its row, and with {@code mirror} the row of the negated node. */
-    private static Decided[] decide(TableDef t, Grid.Quadrature q, NodeSource s, boolean mirror)
+    private static Decided[] decide(TableDef t, TableKind.Quadrature q, NodeSource s, boolean mirror)
             throws UndecidedException, OutOfRangeException {
         int prec = TableEvaluator.startBits(t.format());
         while (true) {
@@ -196,7 +197,7 @@ public final class GaussRule {
     }
 
     /** The entries of one row, or null when some enclosure is too wide to decide its entry. */
-    private static Decided row(TableDef t, Grid.Quadrature q, Enclosure e, int prec)
+    private static Decided row(TableDef t, TableKind.Quadrature q, Enclosure e, int prec)
             throws OutOfRangeException {
         Format format = t.format();
         int wp = prec + 20;
@@ -242,7 +243,7 @@ public final class GaussRule {
     }
 
     /** With weight_underflow = "error": every underflowing weight, counted and located, stops the table. */
-    private static void checkNoUnderflow(TableDef t, Grid.Quadrature q, List<Decided> rows) throws OutOfRangeException {
+    private static void checkNoUnderflow(TableDef t, TableKind.Quadrature q, List<Decided> rows) throws OutOfRangeException {
         List<Decided> tiny = rows.stream().filter(Decided::underflow).toList();
         if (tiny.isEmpty()) {
             return;

@@ -1,7 +1,7 @@
 package dev.odetab.tables.zeros;
 
 import dev.odetab.tables.Column;
-import dev.odetab.tables.Grid;
+import dev.odetab.tables.TableKind;
 import dev.odetab.tables.OutOfRangeException;
 import dev.odetab.tables.TableDef;
 import dev.odetab.tables.TableEvaluator;
@@ -76,7 +76,7 @@ public final class ZeroFinder {
     private static final int MAX_HALVINGS = 24;
 
     private final TableDef table;
-    private final Grid.ZeroSearch search;
+    private final TableKind.Zeros search;
     private final FunctionDef f;
     private final Equation reduced;
     private final Poly poly;
@@ -98,7 +98,7 @@ public final class ZeroFinder {
     private record Cell(Rational a, Rational b, LocalExpansion local, boolean monotone, int sign, BigDecimal slope) {
     }
 
-    private ZeroFinder(TableDef t, Grid.ZeroSearch z) {
+    private ZeroFinder(TableDef t, TableKind.Zeros z) {
         this.table = t;
         this.search = z;
         this.f = t.function();
@@ -121,7 +121,7 @@ public final class ZeroFinder {
      * @throws OutOfRangeException when the search holds no zero, fewer than
      *     {@code count}, or g vanishes identically; or an entry is out of a fixed-point range
      */
-    public static TableResult find(TableDef t, Grid.ZeroSearch z) throws ExprException, UndecidedException,
+    public static TableResult find(TableDef t, TableKind.Zeros z) throws ExprException, UndecidedException,
             OutOfRangeException {
         return new ZeroFinder(t, z).walk();
     }

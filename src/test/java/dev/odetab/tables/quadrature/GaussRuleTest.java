@@ -1,9 +1,9 @@
 package dev.odetab.tables.quadrature;
 
 import dev.odetab.tables.Column;
-import dev.odetab.tables.Grid;
 import dev.odetab.tables.OutOfRangeException;
 import dev.odetab.tables.TableDef;
+import dev.odetab.tables.TableKind;
 import dev.odetab.tables.TableEvaluator;
 import dev.odetab.tables.TableResult;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -66,7 +66,7 @@ class GaussRuleTest {
         for (String c : columns.length == 0 ? new String[] {"node", "weight"} : columns) {
             cols.add(Column.quadrature(c));
         }
-        TableDef t = new TableDef("q", kind.family(), f, new Grid.Quadrature(new GaussFamily(kind, n, ra, rb), flush), cols, Target.of(format, mode), 4096, List.of("csv"));
+        TableDef t = new TableDef("q", kind.family(), f, new TableKind.Quadrature(new GaussFamily(kind, n, ra, rb), flush), cols, Target.of(format, mode), 4096, List.of("csv"));
         return TableEvaluator.evaluate(t);
     }
 

@@ -3,6 +3,7 @@ package dev.odetab.tables.rows;
 import dev.odetab.tables.TableResult;
 
 import dev.odetab.tables.TableDef;
+import dev.odetab.tables.TableKind;
 
 import dev.odetab.tables.Grid;
 
@@ -89,7 +90,7 @@ class RowStoreTest {
     }
 
     private static TableDef table() {
-        return new TableDef("t", "f", null, new Grid.Points(List.of(Rational.ZERO)),
+        return new TableDef("t", "f", null, new TableKind.Values(new Grid.Points(List.of(Rational.ZERO))),
                 List.of(Column.parse("x"), Column.parse("value"), Column.parse("derivative")), Target.nearest(Format.BinaryFormat.BINARY64), 128, List.of("csv"));
     }
 

@@ -3,6 +3,7 @@ package dev.odetab.tables.values;
 import dev.odetab.tables.Column;
 import dev.odetab.tables.Grid;
 import dev.odetab.tables.TableDef;
+import dev.odetab.tables.TableKind;
 import dev.odetab.tables.TableEvaluator;
 import dev.odetab.tables.TableResult;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -33,7 +34,7 @@ class ChebyshevGridTest {
         FunctionDef psi3 = new HermiteFunction().define(Map.of("n", Rational.of(3)));
         for (int kind : new int[] {1, 2}) {
             Grid.Chebyshev grid = new Grid.Chebyshev(kind, 9, Rational.of(-3), Rational.of(5));
-            TableDef t = new TableDef("cheb", "psi3", psi3, grid, List.of(Column.parse("x"), Column.parse("value")), Target.nearest(Format.BinaryFormat.BINARY64), 4096, List.of("csv"));
+            TableDef t = new TableDef("cheb", "psi3", psi3, new TableKind.Values(grid), List.of(Column.parse("x"), Column.parse("value")), Target.nearest(Format.BinaryFormat.BINARY64), 4096, List.of("csv"));
             TableResult r = TableEvaluator.evaluate(t);
             Apfloat pi = ApfloatMath.pi(P);
             for (int i = 0; i < 9; i++) {

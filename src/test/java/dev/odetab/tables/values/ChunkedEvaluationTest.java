@@ -3,6 +3,7 @@ package dev.odetab.tables.values;
 import dev.odetab.tables.Column;
 import dev.odetab.tables.Grid;
 import dev.odetab.tables.TableDef;
+import dev.odetab.tables.TableKind;
 import dev.odetab.tables.TableEvaluator;
 import dev.odetab.tables.TableResult;
 import dev.odetab.base.Progress;
@@ -35,7 +36,7 @@ class ChunkedEvaluationTest {
     private static TableDef airy(Format format, RoundingMode mode, String from, String to, String step) throws Exception {
         FunctionDef f = Catalog.lookup("airy-ai").orElseThrow().define(Map.of());
         Grid grid = new Grid.Uniform(Rational.parse(from), Rational.parse(to), Rational.parse(step));
-        return new TableDef("ai", "ai", f, grid, List.of(Column.parse("x"), Column.parse("value"), Column.parse("derivative")), new Target(format, mode, OutOfRange.SATURATE), 4096, List.of("csv"));
+        return new TableDef("ai", "ai", f, new TableKind.Values(grid), List.of(Column.parse("x"), Column.parse("value"), Column.parse("derivative")), new Target(format, mode, OutOfRange.SATURATE), 4096, List.of("csv"));
     }
 
     @Test

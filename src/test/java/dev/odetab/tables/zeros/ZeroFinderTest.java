@@ -1,9 +1,9 @@
 package dev.odetab.tables.zeros;
 
 import dev.odetab.tables.Column;
-import dev.odetab.tables.Grid;
 import dev.odetab.tables.OutOfRangeException;
 import dev.odetab.tables.TableDef;
+import dev.odetab.tables.TableKind;
 import dev.odetab.tables.TableEvaluator;
 import dev.odetab.tables.TableResult;
 import dev.odetab.tables.UndecidedException;
@@ -49,7 +49,7 @@ class ZeroFinderTest {
 
     private static TableResult zeros(FunctionDef f, String from, String to, int count, boolean ofDerivative, List<String> columns,
             Format format, RoundingMode mode, int capBits) throws Exception {
-        Grid.ZeroSearch z = new Grid.ZeroSearch(Rational.parse(from), Rational.parse(to), count, ofDerivative);
+        TableKind.Zeros z = new TableKind.Zeros(Rational.parse(from), Rational.parse(to), count, ofDerivative);
         List<Column> cols = new ArrayList<>();
         for (String c : columns) {
             cols.add(Column.parse(c));
