@@ -188,78 +188,93 @@ final class ArrayReader {
         while (i < s.length()) {
             char c = s.charAt(i);
             int col = i - lineStart + 1;
+            int next;
             if (c == '\n') {
-                line++;
-                lineStart = i + 1;
                 lineHasToken = false;
-                i++;
+                next = i + 1;
             } else if (Character.isWhitespace(c)) {
-                i++;
+                next = i + 1;
             } else if (c == '#' && !lineHasToken) {
-                while (i < s.length() && s.charAt(i) != '\n') {
-                    if (s.charAt(i) == '\\' && i + 1 < s.length() && s.charAt(i + 1) == '\n') {
-                        i++;
-                        line++;
-                        lineStart = i + 1;
-                    }
-                    i++;
-                }
+                next = preprocessorEnd(s, i);
             } else if (s.startsWith("//", i)) {
-                while (i < s.length() && s.charAt(i) != '\n') {
-                    i++;
-                }
+                next = s.indexOf('\n', i) < 0 ? s.length() : s.indexOf('\n', i);
             } else if (s.startsWith("/*", i)) {
                 int end = s.indexOf("*/", i + 2);
                 if (end < 0) {
                     throw new InputError(display + ":" + line + ":" + col, "unterminated comment");
                 }
-                for (int j = i; j < end; j++) {
-                    if (s.charAt(j) == '\n') {
-                        line++;
-                        lineStart = j + 1;
-                    }
-                }
-                i = end + 2;
+                next = end + 2;
             } else if (c == '"' || c == '\'') {
-                int j = i + 1;
-                while (j < s.length() && s.charAt(j) != c && s.charAt(j) != '\n') {
-                    j += s.charAt(j) == '\\' ? 2 : 1;
-                }
-                if (j >= s.length() || s.charAt(j) != c) {
+                next = quotedEnd(s, i);
+                if (next < 0) {
                     throw new InputError(display + ":" + line + ":" + col, "unterminated " + (c == '"' ? "string" : "character") + " literal");
                 }
-                i = j + 1;
                 lineHasToken = true;
-            } else if (Character.isDigit(c) || (c == '.' && i + 1 < s.length() && Character.isDigit(s.charAt(i + 1)))) {
-                int j = i;
-                while (j < s.length()) {
-                    char d = s.charAt(j);
-                    boolean sign = (d == '+' || d == '-') && j > i && exponentMark(s, i, j - 1);
-                    if (Character.isLetterOrDigit(d) || d == '.' || d == '_' || sign) {
-                        j++;
-                    } else {
-                        break;
-                    }
-                }
-                r.add(new Token(s.substring(i, j), 'n', line, col));
-                lineHasToken = true;
-                i = j;
-            } else if (Character.isJavaIdentifierStart(c)) {
-                int j = i;
-                while (j < s.length() && (Character.isJavaIdentifierPart(s.charAt(j))
-                        || (s.charAt(j) == '.' && j + 1 < s.length() && Character.isJavaIdentifierStart(s.charAt(j + 1))))) {
-                    j++;
-                }
-                r.add(new Token(s.substring(i, j), 'i', line, col));
-                lineHasToken = true;
-                i = j;
+                i = next; // as before, a backslash-newline inside a literal does not advance the line count
+                continue;
             } else {
-                r.add(new Token(String.valueOf(c), 'p', line, col));
+                char kind = startsNumber(s, i) ? 'n' : Character.isJavaIdentifierStart(c) ? 'i' : 'p';
+                next = kind == 'n' ? numberEnd(s, i) : kind == 'i' ? identifierEnd(s, i) : i + 1;
+                r.add(new Token(s.substring(i, next), kind, line, col));
                 lineHasToken = true;
-                i++;
             }
+            for (int k = i; k < next; k++) {
+                if (s.charAt(k) == '\n') {
+                    line++;
+                    lineStart = k + 1;
+                }
+            }
+            i = next;
         }
         return r;
+    }
+
+    /** The end of a preprocessor line that starts at i, continued by backslash-newline (its final newline excluded). */
+    private static int preprocessorEnd(String s, int i) {
+        int j = i;
+        while (j < s.length() && s.charAt(j) != '\n') {
+            j += s.charAt(j) == '\\' && j + 1 < s.length() && s.charAt(j + 1) == '\n' ? 2 : 1;
+        }
+        return j;
+    }
+
+    /** Just past the closing quote of the string or character literal at i, or −1 when the line or text ends first. */
+    private static int quotedEnd(String s, int i) {
+        char quote = s.charAt(i);
+        int j = i + 1;
+        while (j < s.length() && s.charAt(j) != quote && s.charAt(j) != '\n') {
+            j += s.charAt(j) == '\\' ? 2 : 1;
+        }
+        return j < s.length() && s.charAt(j) == quote ? j + 1 : -1;
+    }
+
+    private static boolean startsNumber(String s, int i) {
+        char c = s.charAt(i);
+        return Character.isDigit(c) || (c == '.' && i + 1 < s.length() && Character.isDigit(s.charAt(i + 1)));
+    }
+
+    /** The end of the numeric literal at i: letters, digits, '.', '_' and the sign after an exponent mark. */
+    private static int numberEnd(String s, int i) {
+        int j = i;
+        while (j < s.length()) {
+            char d = s.charAt(j);
+            boolean sign = (d == '+' || d == '-') && j > i && exponentMark(s, i, j - 1);
+            if (!(Character.isLetterOrDigit(d) || d == '.' || d == '_' || sign)) {
+                break;
+            }
+            j++;
+        }
+        return j;
+    }
+
+    /** The end of the identifier at i, Java qualified names ({@code Double.NaN}) joined. */
+    private static int identifierEnd(String s, int i) {
+        int j = i;
+        while (j < s.length() && (Character.isJavaIdentifierPart(s.charAt(j))
+                || (s.charAt(j) == '.' && j + 1 < s.length() && Character.isJavaIdentifierStart(s.charAt(j + 1))))) {
+            j++;
+        }
+        return j;
     }
 
     /** Exact: whether s[k] is the exponent mark of the number starting at {@code start} (e/E, or p/P in hex). */
