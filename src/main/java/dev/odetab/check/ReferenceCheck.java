@@ -203,56 +203,9 @@ public final class ReferenceCheck {
         List<Outcome> r = new ArrayList<>();
         int p = 200;
         try {
-            // DLMF 9.2.7: W{Ai, Bi} = Ai Bi' − Ai' Bi = 1/π.
-            FunctionDef ai = Catalog.lookup("airy-ai").orElseThrow().define(Map.of());
-            FunctionDef bi = Catalog.lookup("airy-bi").orElseThrow().define(Map.of());
-            Ball invPi = Ball.ONE.divide(BallFunctions.pi(p), p);
-            List<String> fails = new ArrayList<>();
-            String[] xs = {"-7.5", "-1", "0", "1/3", "2", "4.25"};
-            for (String xs1 : xs) {
-                Jet a = FunctionEvaluator.enclose(ai, Rational.parse(xs1), p).jet();
-                Jet b = FunctionEvaluator.enclose(bi, Rational.parse(xs1), p).jet();
-                Ball w = a.value().multiply(b.derivative(), p).subtract(a.derivative().multiply(b.value(), p), p);
-                if (!w.overlaps(invPi)) {
-                    fails.add("W{Ai, Bi}(" + xs1 + ") = " + w + " does not contain 1/pi");
-                }
-            }
-            r.add(new Outcome("identity W{Ai, Bi} = 1/pi", "DLMF 9.2.7", xs.length, fails, 0));
-
-            // DLMF 12.7.2: U(−1/2, x) = e^(−x²/4).
-            FunctionDef u = Catalog.lookup("weber-u").orElseThrow().define(Map.of("a", Rational.of(-1, 2)));
-            fails = new ArrayList<>();
-            String[] ux = {"-3", "-0.5", "1", "2.75"};
-            for (String s : ux) {
-                Rational x = Rational.parse(s);
-                Ball v = FunctionEvaluator.enclose(u, x, p).jet().value();
-                Ball e = BallFunctions.exp(Ball.of(x.multiply(x).divide(Rational.of(-4)), p), p);
-                if (!v.overlaps(e)) {
-                    fails.add("U(-1/2, " + s + ") = " + v + " differs from exp(-x^2/4) = " + e);
-                }
-            }
-            r.add(new Outcome("identity U(-1/2, x) = exp(-x^2/4)", "DLMF 12.7.2", ux.length, fails, 0));
-
-            // DLMF 18.9.1 for the orthonormal Hermite functions: x ψ_n = sqrt((n+1)/2) ψ_{n+1} + sqrt(n/2) ψ_{n−1}.
-            fails = new ArrayList<>();
-            int count = 0;
-            for (int n = 1; n <= 12; n += 5) {
-                FunctionDef lo = Catalog.lookup("hermite-function").orElseThrow().define(Map.of("n", Rational.of(n - 1)));
-                FunctionDef mid = Catalog.lookup("hermite-function").orElseThrow().define(Map.of("n", Rational.of(n)));
-                FunctionDef hi = Catalog.lookup("hermite-function").orElseThrow().define(Map.of("n", Rational.of(n + 1)));
-                for (String s : new String[] {"-2.5", "0.75", "3"}) {
-                    Rational x = Rational.parse(s);
-                    Ball left = FunctionEvaluator.enclose(mid, x, p).jet().value().multiply(x, p);
-                    Ball right = BallFunctions.sqrt(Ball.of(Rational.of(n + 1, 2), p), p).multiply(FunctionEvaluator.enclose(hi, x, p).jet().value(), p)
-                            .add(BallFunctions.sqrt(Ball.of(Rational.of(n, 2), p), p).multiply(FunctionEvaluator.enclose(lo, x, p).jet().value(), p), p);
-                    count++;
-                    if (!left.overlaps(right)) {
-                        fails.add("x psi_" + n + "(" + s + ") = " + left + " but the recurrence gives " + right);
-                    }
-                }
-            }
-            r.add(new Outcome("identity x psi_n = sqrt((n+1)/2) psi_n+1 + sqrt(n/2) psi_n-1", "DLMF 18.9.1 (orthonormal form)", count, fails, 0));
-
+            r.add(airyWronskian(p));
+            r.add(weberGaussian(p));
+            r.add(hermiteFunctionRecurrence(p));
             // DLMF 18.9.1 (Table 18.9.1), three-term recurrences written as a_n p_(n+1) = (b_n + c_n x) p_n − d_n p_(n−1).
             r.add(recurrence("legendre-p", "(n+1) P_n+1 = (2n+1) x P_n - n P_n-1", new String[] {"-0.7", "1/3", "0.9"},
                     (n, x) -> new Rational[] {Rational.of(n + 1), x.multiply(Rational.of(2 * n + 1)), Rational.of(n)}, p));
@@ -262,30 +215,89 @@ public final class ReferenceCheck {
                     (n, x) -> new Rational[] {Rational.ONE, x.multiply(Rational.of(2)), Rational.of(2L * n)}, p));
             r.add(recurrence("laguerre-l", "(n+1) L_n+1 = (2n+1-x) L_n - n L_n-1", new String[] {"0.5", "3", "10.25"},
                     (n, x) -> new Rational[] {Rational.of(n + 1), Rational.of(2 * n + 1).subtract(x), Rational.of(n)}, p));
-
-            // DLMF 14.2.4 with mu = 0: W{P_n, Q_n} = P_n Q_n' − P_n' Q_n = 1/(1 − x²) on −1 < x < 1.
-            fails = new ArrayList<>();
-            count = 0;
-            for (int n : new int[] {0, 3, 10}) {
-                FunctionDef pn = Catalog.lookup("legendre-p").orElseThrow().define(Map.of("n", Rational.of(n)));
-                FunctionDef qn = Catalog.lookup("legendre-q").orElseThrow().define(Map.of("n", Rational.of(n)));
-                for (String s : new String[] {"-0.5", "1/3", "0.875"}) {
-                    Rational x = Rational.parse(s);
-                    Jet a = FunctionEvaluator.enclose(pn, x, p).jet();
-                    Jet b = FunctionEvaluator.enclose(qn, x, p).jet();
-                    Ball w = a.value().multiply(b.derivative(), p).subtract(a.derivative().multiply(b.value(), p), p);
-                    Rational expected = Rational.ONE.divide(Rational.ONE.subtract(x.multiply(x)));
-                    count++;
-                    if (!w.contains(expected)) {
-                        fails.add("W{P_" + n + ", Q_" + n + "}(" + s + ") = " + w + " does not contain 1/(1-x^2) = " + expected.toDecimalOrFraction());
-                    }
-                }
-            }
-            r.add(new Outcome("identity W{P_n, Q_n} = 1/(1-x^2)", "DLMF 14.2.4 (mu = 0)", count, fails, 0));
+            r.add(legendreWronskian(p));
         } catch (ExprException | ParameterException e) {
             throw new DataError("identity check: " + e.getMessage());
         }
         return r;
+    }
+
+    /** DLMF 9.2.7: W{Ai, Bi} = Ai Bi' − Ai' Bi = 1/π, as ball overlap. */
+    private static Outcome airyWronskian(int p) throws ExprException, ParameterException {
+        FunctionDef ai = Catalog.lookup("airy-ai").orElseThrow().define(Map.of());
+        FunctionDef bi = Catalog.lookup("airy-bi").orElseThrow().define(Map.of());
+        Ball invPi = Ball.ONE.divide(BallFunctions.pi(p), p);
+        List<String> fails = new ArrayList<>();
+        String[] xs = {"-7.5", "-1", "0", "1/3", "2", "4.25"};
+        for (String xs1 : xs) {
+            Jet a = FunctionEvaluator.enclose(ai, Rational.parse(xs1), p).jet();
+            Jet b = FunctionEvaluator.enclose(bi, Rational.parse(xs1), p).jet();
+            Ball w = a.value().multiply(b.derivative(), p).subtract(a.derivative().multiply(b.value(), p), p);
+            if (!w.overlaps(invPi)) {
+                fails.add("W{Ai, Bi}(" + xs1 + ") = " + w + " does not contain 1/pi");
+            }
+        }
+        return new Outcome("identity W{Ai, Bi} = 1/pi", "DLMF 9.2.7", xs.length, fails, 0);
+    }
+
+    /** DLMF 12.7.2: U(−1/2, x) = e^(−x²/4), as ball overlap. */
+    private static Outcome weberGaussian(int p) throws ExprException, ParameterException {
+        FunctionDef u = Catalog.lookup("weber-u").orElseThrow().define(Map.of("a", Rational.of(-1, 2)));
+        List<String> fails = new ArrayList<>();
+        String[] ux = {"-3", "-0.5", "1", "2.75"};
+        for (String s : ux) {
+            Rational x = Rational.parse(s);
+            Ball v = FunctionEvaluator.enclose(u, x, p).jet().value();
+            Ball e = BallFunctions.exp(Ball.of(x.multiply(x).divide(Rational.of(-4)), p), p);
+            if (!v.overlaps(e)) {
+                fails.add("U(-1/2, " + s + ") = " + v + " differs from exp(-x^2/4) = " + e);
+            }
+        }
+        return new Outcome("identity U(-1/2, x) = exp(-x^2/4)", "DLMF 12.7.2", ux.length, fails, 0);
+    }
+
+    /** DLMF 18.9.1 for the orthonormal Hermite functions: x ψ_n = sqrt((n+1)/2) ψ_{n+1} + sqrt(n/2) ψ_{n−1}. */
+    private static Outcome hermiteFunctionRecurrence(int p) throws ExprException, ParameterException {
+        List<String> fails = new ArrayList<>();
+        int count = 0;
+        for (int n = 1; n <= 12; n += 5) {
+            FunctionDef lo = Catalog.lookup("hermite-function").orElseThrow().define(Map.of("n", Rational.of(n - 1)));
+            FunctionDef mid = Catalog.lookup("hermite-function").orElseThrow().define(Map.of("n", Rational.of(n)));
+            FunctionDef hi = Catalog.lookup("hermite-function").orElseThrow().define(Map.of("n", Rational.of(n + 1)));
+            for (String s : new String[] {"-2.5", "0.75", "3"}) {
+                Rational x = Rational.parse(s);
+                Ball left = FunctionEvaluator.enclose(mid, x, p).jet().value().multiply(x, p);
+                Ball right = BallFunctions.sqrt(Ball.of(Rational.of(n + 1, 2), p), p).multiply(FunctionEvaluator.enclose(hi, x, p).jet().value(), p)
+                        .add(BallFunctions.sqrt(Ball.of(Rational.of(n, 2), p), p).multiply(FunctionEvaluator.enclose(lo, x, p).jet().value(), p), p);
+                count++;
+                if (!left.overlaps(right)) {
+                    fails.add("x psi_" + n + "(" + s + ") = " + left + " but the recurrence gives " + right);
+                }
+            }
+        }
+        return new Outcome("identity x psi_n = sqrt((n+1)/2) psi_n+1 + sqrt(n/2) psi_n-1", "DLMF 18.9.1 (orthonormal form)", count, fails, 0);
+    }
+
+    /** DLMF 14.2.4 with μ = 0: W{P_n, Q_n} = P_n Q_n' − P_n' Q_n = 1/(1 − x²) on −1 &lt; x &lt; 1, as containment. */
+    private static Outcome legendreWronskian(int p) throws ExprException, ParameterException {
+        List<String> fails = new ArrayList<>();
+        int count = 0;
+        for (int n : new int[] {0, 3, 10}) {
+            FunctionDef pn = Catalog.lookup("legendre-p").orElseThrow().define(Map.of("n", Rational.of(n)));
+            FunctionDef qn = Catalog.lookup("legendre-q").orElseThrow().define(Map.of("n", Rational.of(n)));
+            for (String s : new String[] {"-0.5", "1/3", "0.875"}) {
+                Rational x = Rational.parse(s);
+                Jet a = FunctionEvaluator.enclose(pn, x, p).jet();
+                Jet b = FunctionEvaluator.enclose(qn, x, p).jet();
+                Ball w = a.value().multiply(b.derivative(), p).subtract(a.derivative().multiply(b.value(), p), p);
+                Rational expected = Rational.ONE.divide(Rational.ONE.subtract(x.multiply(x)));
+                count++;
+                if (!w.contains(expected)) {
+                    fails.add("W{P_" + n + ", Q_" + n + "}(" + s + ") = " + w + " does not contain 1/(1-x^2) = " + expected.toDecimalOrFraction());
+                }
+            }
+        }
+        return new Outcome("identity W{P_n, Q_n} = 1/(1-x^2)", "DLMF 14.2.4 (mu = 0)", count, fails, 0);
     }
 
     /** The coefficients (a_n, b_n + c_n x, d_n) of a three-term recurrence at degree n and point x. */
