@@ -115,6 +115,12 @@ public final class FastStepper {
      * overflow, or more than {@value #MAX_TERMS} terms). Not thread-safe (scratch arrays): one
      * stepper per thread.
      *
+     * <p>This method is longer than our 80-line limit on purpose: it is the hot loop of the
+     * fast tier (about half of a binary64 table's time), and the shift, the recurrence, the
+     * summation and the tail bound share the same scratch arrays and locals. Split into
+     * methods, the per-term state would travel through fields or small arrays on every call;
+     * kept whole, its error analysis (class comment) reads top to bottom beside the code.
+     *
      * @param c a ball containing the exact center
      * @param y a ball containing y(center)
      * @param dy a ball containing y'(center)
