@@ -14,7 +14,7 @@ import org.junit.jupiter.api.Test;
  * random balls, the exact result at the ends and the middle of the operands lies in the result
  * ball; the fast binary64/binary32 roundings agree with IEEE 754-2019 round-to-nearest-even as
  * computed exactly by {@link Rounding#round} (itself checked against Java's correctly rounded
- * conversions in RandomRoundingTest) at every point checked.
+ * conversions in RoundingTest) at every point checked.
  */
 class DDBallTest {
     private static final long SEED = Long.getLong("test.seed", 20261202L);

@@ -1,10 +1,8 @@
 package dev.odetab.series;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.odetab.expr.Poly;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.Equation;
 import java.math.BigDecimal;
@@ -20,37 +18,14 @@ import org.junit.jupiter.api.Test;
  * must stay within a small factor of it.
  */
 class TailBoundTest {
-    private static final Equation AIRY = new Equation(Poly.ONE, Poly.ZERO, Poly.X.negate());
 
-    /** Legendre's equation (1 − x²) y'' − 2x y' + n(n+1) y = 0, DLMF 14.2.1 with μ = 0. */
-    private static Equation legendre(int n) {
-        return new Equation(Poly.of(Rational.ONE, Rational.ZERO, Rational.of(-1)), Poly.of(Rational.ZERO, Rational.of(-2)),
-                Poly.constant(Rational.of((long) n * (n + 1))));
-    }
-
-    @Test
-    void recurrenceMatchesTheClosedFormsOfMethodsSection1() {
-        // Airy at alpha: beta_2 = alpha/(m(m−1)), beta_3 = 1/(m(m−1)); Legendre at 0:
-        // beta_2(m) = ((m−2)(m−1) − n(n+1))/(m(m−1)).
-        Recurrence airy = new Recurrence(AIRY, Rational.of(-3));
-        assertEquals(3, airy.order());
-        for (int m = 2; m < 20; m++) {
-            assertEquals(Rational.ZERO, airy.beta(1, m));
-            assertEquals(Rational.of(-3, (long) m * (m - 1)), airy.beta(2, m));
-            assertEquals(Rational.of(1, (long) m * (m - 1)), airy.beta(3, m));
-        }
-        Recurrence leg = new Recurrence(legendre(5), Rational.ZERO);
-        for (int m = 2; m < 20; m++) {
-            assertEquals(Rational.of((long) (m - 2) * (m - 1) - 30, (long) m * (m - 1)), leg.beta(2, m));
-        }
-    }
 
     @Test
     void boundEnclosesTheExactTailAndStaysClose() {
         double worst = 0;
-        worst = Math.max(worst, check(AIRY, Rational.of(-3), Rational.of(1, 2)));
-        worst = Math.max(worst, check(legendre(5), Rational.of(1, 2), Rational.of(1, 4)));
-        worst = Math.max(worst, check(legendre(5), Rational.of(1, 2), Rational.of(2, 5)));
+        worst = Math.max(worst, check(Equations.AIRY, Rational.of(-3), Rational.of(1, 2)));
+        worst = Math.max(worst, check(Equations.legendre(5), Rational.of(1, 2), Rational.of(1, 4)));
+        worst = Math.max(worst, check(Equations.legendre(5), Rational.of(1, 2), Rational.of(2, 5)));
         System.out.printf("tail bound / true tail, worst over N = 20..100: %.3f%n", worst);
     }
 

@@ -16,7 +16,7 @@ import org.junit.jupiter.api.Test;
  * 10^-95 around its 110-digit value), then continued by the engine; the result must contain
  * apfloat's value at the target (apfloat 1.15.0, ApfloatMath.airyAi / airyAiPrime).
  */
-class ContinuationAiryTest {
+class ContinuationTest {
     private static final Equation AIRY = new Equation(Poly.ONE, Poly.ZERO, Poly.X.negate());
 
     private static Ball around(Apfloat v) {

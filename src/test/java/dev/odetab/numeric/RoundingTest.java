@@ -23,7 +23,7 @@ import org.junit.jupiter.api.Test;
  * checks that DOWN and UP are neighbours; {@code Double.parseDouble} reads hex literals
  * (Java SE API {@code Double.valueOf}: HexFloatingPointLiteral).
  */
-class RandomRoundingTest {
+class RoundingTest {
     private static final int COUNT = 100_000;
 
     /** The default run: every value against the JDK; a sample against the oracle and for shortest decimals. */

@@ -9,13 +9,15 @@ import java.util.Random;
 import org.junit.jupiter.api.Test;
 
 /**
- * {@link Entry#shortestDecimal} against its definition, evaluated here the slow way in exact
+ * {@link Entry}'s spellings and encodings against outside references.
+ *
+ * <p>{@link Entry#shortestDecimal} against its definition, evaluated here the slow way in exact
  * rational arithmetic: the interval of reals that round to the entry (IEEE 754-2019 §4.3.1,
  * round to nearest, ties to even), the largest k with a multiple of 10^k in it, and among those
  * multiples the one nearest the value. Also read back with Java's correctly rounded
  * Double.parseDouble / Float.parseFloat (Java SE API).
  */
-class ShortestDecimalTest {
+class EntryTest {
     private static final long SEED = Long.getLong("test.seed", 7L);
 
     /** The definition: m·10^k for the largest feasible k, m nearest to v/10^k within the interval. */
@@ -50,6 +52,38 @@ class ShortestDecimalTest {
             }
         }
         throw new AssertionError("no decimal");
+    }
+
+    @Test
+    void encodingsAndHexLiteralsAgreeWithJava() {
+        // Double.doubleToRawLongBits / Float.floatToRawIntBits give the IEEE 754-2019 §3.4
+        // interchange encodings; Double.parseDouble and Float.parseFloat read C99 hex floats
+        // exactly (Java SE API, HexFloatingPointLiteral).
+        Random rnd = new Random(SEED + 1);
+        for (int i = 0; i < 2000; i++) {
+            double d = i < 4 ? new double[] {0x1p-1074, -Double.MAX_VALUE, -0.0, 0x1.8p+1}[i] : Double.longBitsToDouble(rnd.nextLong());
+            if (Double.isNaN(d) || Double.isInfinite(d)) {
+                continue;
+            }
+            if (d == 0 && 1 / d < 0) {
+                continue; // an exact rational has no sign of zero: -0.0 is not an entry of an exact value
+            }
+            Entry e64 = Rounding.round(Rational.ofDouble(d), Target.nearest(Format.BinaryFormat.BINARY64));
+            String what = "seed " + SEED + ", d = " + Double.toHexString(d);
+            assertEquals(BigInteger.valueOf(Double.doubleToRawLongBits(d)).and(BigInteger.ONE.shiftLeft(64).subtract(BigInteger.ONE)),
+                    e64.bits(), what);
+            assertEquals(d, Double.parseDouble(e64.hexLiteral()), what);
+            float f = (float) d;
+            if (Float.isInfinite(f) || f == 0) {
+                continue;
+            }
+            Entry e32 = Rounding.round(Rational.ofDouble(f), Target.nearest(Format.BinaryFormat.BINARY32));
+            assertEquals(BigInteger.valueOf(Float.floatToRawIntBits(f) & 0xffffffffL), e32.bits(), what);
+            assertEquals(f, Float.parseFloat(e32.hexLiteral()), what);
+        }
+        assertEquals("0x1.8p+1", Rounding.round(Rational.of(3), Target.nearest(Format.BinaryFormat.BINARY64)).hexLiteral());
+        assertEquals("0x0.0000000000001p-1022",
+                Rounding.round(Rational.ofDouble(0x1p-1074), Target.nearest(Format.BinaryFormat.BINARY64)).hexLiteral());
     }
 
     @Test
