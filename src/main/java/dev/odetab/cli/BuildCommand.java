@@ -10,7 +10,7 @@ import dev.odetab.tables.OutOfRangeException;
 import dev.odetab.tables.TableDef;
 import dev.odetab.tables.TableEvaluator;
 import dev.odetab.tables.TableResult;
-import dev.odetab.tables.UndecidedException;
+import dev.odetab.series.PrecisionCapException;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;
@@ -122,9 +122,8 @@ final class BuildCommand implements Callable<Integer> {
         } catch (ExprException e) {
             err.println("odetab: " + failedAt() + "a normalization constant cannot be evaluated: " + e.getMessage());
             return Main.BAD_INPUT;
-        } catch (UndecidedException e) {
-            err.println("odetab: " + failedAt() + e.getMessage());
-            return Main.NUMERICAL_LIMIT;
+        } catch (PrecisionCapException e) {
+            return Failures.numericalLimit(failedAt(), e, "", err);
         } catch (IOException e) {
             err.println("odetab: cannot write the outputs: " + e.getMessage());
             return Main.BAD_INPUT;
@@ -147,7 +146,7 @@ final class BuildCommand implements Callable<Integer> {
      * table order (so the caller releases them even when a later table fails).
      */
     private void evaluate(List<Job> work, int n, PrintWriter err, List<TableResult> results) throws ExprException,
-            UndecidedException, OutOfRangeException {
+            PrecisionCapException, OutOfRangeException {
         ProgressDisplay progress = ProgressDisplay.forBuild("odetab: evaluating", "rows", quiet);
         // Tables run on one pool and the chunks of large grids on another, so that a table
         // waiting for its chunks never holds a thread that a chunk needs.

@@ -2,7 +2,7 @@ package dev.odetab.tables;
 
 import dev.odetab.base.ExprException;
 import dev.odetab.base.Progress;
-import dev.odetab.numeric.Format;
+import dev.odetab.series.PrecisionCapException;
 import dev.odetab.tables.quadrature.GaussRule;
 import dev.odetab.tables.values.ValuesEvaluator;
 import dev.odetab.tables.zeros.ZeroFinder;
@@ -24,15 +24,15 @@ public final class TableEvaluator {
      * class comment for how it is decided); zeros tables go to {@link ZeroFinder}, quadrature
      * tables to {@link GaussRule}. Evaluated in the calling thread.
      *
-     * @throws UndecidedException when the table's precision cap cannot decide some entries (named)
+     * @throws PrecisionCapException when the table's precision cap cannot decide some entries (named)
      * @throws OutOfRangeException when a fixed-point entry is out of range and the policy is "error"
      */
-    public static TableResult evaluate(TableDef t) throws ExprException, UndecidedException, OutOfRangeException {
+    public static TableResult evaluate(TableDef t) throws ExprException, PrecisionCapException, OutOfRangeException {
         return evaluate(t, Progress.NONE, null);
     }
 
     /** As {@link #evaluate(TableDef)}, reporting rows to {@code progress} as they are decided. */
-    public static TableResult evaluate(TableDef t, Progress progress) throws ExprException, UndecidedException, OutOfRangeException {
+    public static TableResult evaluate(TableDef t, Progress progress) throws ExprException, PrecisionCapException, OutOfRangeException {
         return evaluate(t, progress, null);
     }
 
@@ -42,26 +42,26 @@ public final class TableEvaluator {
      * not depend on the pool ({@link ValuesEvaluator#evaluate}).
      */
     public static TableResult evaluate(TableDef t, Progress progress, ExecutorService pool)
-            throws ExprException, UndecidedException, OutOfRangeException {
+            throws ExprException, PrecisionCapException, OutOfRangeException {
         return t.kind().evaluate(t, new TableKind.Evaluators() {
             @Override
-            public TableResult values(TableDef table, TableKind.Values kind) throws ExprException, UndecidedException, OutOfRangeException {
+            public TableResult values(TableDef table, TableKind.Values kind) throws ExprException, PrecisionCapException, OutOfRangeException {
                 return ValuesEvaluator.evaluate(table, progress, pool);
             }
 
             @Override
-            public TableResult taylor(TableDef table, TableKind.Taylor kind) throws ExprException, UndecidedException, OutOfRangeException {
+            public TableResult taylor(TableDef table, TableKind.Taylor kind) throws ExprException, PrecisionCapException, OutOfRangeException {
                 return ValuesEvaluator.evaluate(table, progress, pool);
             }
 
             @Override
-            public TableResult zeros(TableDef table, TableKind.Zeros kind) throws ExprException, UndecidedException, OutOfRangeException {
+            public TableResult zeros(TableDef table, TableKind.Zeros kind) throws ExprException, PrecisionCapException, OutOfRangeException {
                 // The number of zeros is not known before the search: they are reported when it ends.
                 return reported(ZeroFinder.find(table, kind), progress);
             }
 
             @Override
-            public TableResult quadrature(TableDef table, TableKind.Quadrature kind) throws UndecidedException, OutOfRangeException {
+            public TableResult quadrature(TableDef table, TableKind.Quadrature kind) throws PrecisionCapException, OutOfRangeException {
                 return reported(GaussRule.table(table, kind), progress);
             }
         });
@@ -78,7 +78,7 @@ public final class TableEvaluator {
      * The result of a task of table evaluation, with the evaluation's own exceptions unwrapped
      * from the ExecutionException.
      */
-    public static <T> T await(Future<T> f) throws ExprException, UndecidedException, OutOfRangeException {
+    public static <T> T await(Future<T> f) throws ExprException, PrecisionCapException, OutOfRangeException {
         try {
             return f.get();
         } catch (InterruptedException e) {
@@ -89,7 +89,7 @@ public final class TableEvaluator {
             if (c instanceof ExprException x) {
                 throw x;
             }
-            if (c instanceof UndecidedException x) {
+            if (c instanceof PrecisionCapException x) {
                 throw x;
             }
             if (c instanceof OutOfRangeException x) {
@@ -103,10 +103,5 @@ public final class TableEvaluator {
             }
             throw new IllegalStateException(c);
         }
-    }
-
-    /** The bits the format holds, plus guard bits: where the precision loop starts. */
-    public static int startBits(Format f) {
-        return f.significantBits() + 40;
     }
 }

@@ -2,6 +2,7 @@ package dev.odetab.tables;
 
 import dev.odetab.base.ExprException;
 import dev.odetab.numeric.Rational;
+import dev.odetab.series.PrecisionCapException;
 import dev.odetab.tables.quadrature.GaussFamily;
 import java.util.Optional;
 
@@ -16,17 +17,17 @@ import java.util.Optional;
 public sealed interface TableKind {
     /** One evaluation per kind: the calls {@link #evaluate} dispatches to. */
     interface Evaluators {
-        TableResult values(TableDef t, Values kind) throws ExprException, UndecidedException, OutOfRangeException;
+        TableResult values(TableDef t, Values kind) throws ExprException, PrecisionCapException, OutOfRangeException;
 
-        TableResult taylor(TableDef t, Taylor kind) throws ExprException, UndecidedException, OutOfRangeException;
+        TableResult taylor(TableDef t, Taylor kind) throws ExprException, PrecisionCapException, OutOfRangeException;
 
-        TableResult zeros(TableDef t, Zeros kind) throws ExprException, UndecidedException, OutOfRangeException;
+        TableResult zeros(TableDef t, Zeros kind) throws ExprException, PrecisionCapException, OutOfRangeException;
 
-        TableResult quadrature(TableDef t, Quadrature kind) throws ExprException, UndecidedException, OutOfRangeException;
+        TableResult quadrature(TableDef t, Quadrature kind) throws ExprException, PrecisionCapException, OutOfRangeException;
     }
 
     /** The table {@code t} (of this kind) evaluated by the evaluator of this kind among {@code e}. */
-    TableResult evaluate(TableDef t, Evaluators e) throws ExprException, UndecidedException, OutOfRangeException;
+    TableResult evaluate(TableDef t, Evaluators e) throws ExprException, PrecisionCapException, OutOfRangeException;
 
     /**
      * The grid of a kind whose points are given (values, taylor); empty for a kind whose points
@@ -76,7 +77,7 @@ public sealed interface TableKind {
     /** A values table: y and its derivatives at the points of a grid. */
     record Values(Grid grid) implements OnGrid {
         @Override
-        public TableResult evaluate(TableDef t, Evaluators e) throws ExprException, UndecidedException, OutOfRangeException {
+        public TableResult evaluate(TableDef t, Evaluators e) throws ExprException, PrecisionCapException, OutOfRangeException {
             return e.values(t, this);
         }
     }
@@ -84,7 +85,7 @@ public sealed interface TableKind {
     /** A taylor table: the first {@code terms} Taylor coefficients y^(k)(x)/k! at each point of a grid. */
     record Taylor(Grid grid, int terms) implements OnGrid {
         @Override
-        public TableResult evaluate(TableDef t, Evaluators e) throws ExprException, UndecidedException, OutOfRangeException {
+        public TableResult evaluate(TableDef t, Evaluators e) throws ExprException, PrecisionCapException, OutOfRangeException {
             return e.taylor(t, this);
         }
     }
@@ -95,7 +96,7 @@ public sealed interface TableKind {
      */
     record Zeros(Rational from, Rational to, int count, boolean ofDerivative) implements Found {
         @Override
-        public TableResult evaluate(TableDef t, Evaluators e) throws ExprException, UndecidedException, OutOfRangeException {
+        public TableResult evaluate(TableDef t, Evaluators e) throws ExprException, PrecisionCapException, OutOfRangeException {
             return e.zeros(t, this);
         }
 
@@ -120,7 +121,7 @@ public sealed interface TableKind {
      */
     record Quadrature(GaussFamily family, boolean flushUnderflow) implements Found {
         @Override
-        public TableResult evaluate(TableDef t, Evaluators e) throws ExprException, UndecidedException, OutOfRangeException {
+        public TableResult evaluate(TableDef t, Evaluators e) throws ExprException, PrecisionCapException, OutOfRangeException {
             return e.quadrature(t, this);
         }
 

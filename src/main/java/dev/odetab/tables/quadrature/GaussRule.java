@@ -7,7 +7,8 @@ import dev.odetab.tables.TableDef;
 import dev.odetab.tables.TableEvaluator;
 import dev.odetab.tables.TableKind;
 import dev.odetab.tables.TableResult;
-import dev.odetab.tables.UndecidedException;
+import dev.odetab.series.PrecisionCapException;
+import dev.odetab.series.PrecisionLoop;
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.BallFunctions;
 import dev.odetab.numeric.Entry;
@@ -55,7 +56,7 @@ import java.util.Optional;
  *
  * <p>Weights: w = K / g(x, p_n'(x)) ({@link GaussFamily}), with p_n' enclosed over X. Precision:
  * Ziv's loop per node, from the format's bits plus guard bits, doubling up to the table's cap
- * ({@link UndecidedException} beyond it).
+ * ({@link PrecisionCapException} beyond it).
  *
  * <p>Underflow (IEEE 754-2019 §7.5: tiny results): a weight whose correctly rounded binary entry
  * is below the smallest normal number 2^emin (subnormal or zero) is an error, or, with
@@ -101,11 +102,11 @@ public final class GaussRule {
     /**
      * Rigorous: the rule of {@code q} as the rows of table {@code t} (class comment).
      *
-     * @throws UndecidedException when the precision cap cannot decide a row or separate the nodes
+     * @throws PrecisionCapException when the precision cap cannot decide a row or separate the nodes
      * @throws OutOfRangeException when a weight underflows (policy "error") or a fixed-point entry is out of range
      */
     public static TableResult table(TableDef t, TableKind.Quadrature q)
-            throws UndecidedException, OutOfRangeException {
+            throws PrecisionCapException, OutOfRangeException {
         GaussFamily f = q.family();
         int n = f.n();
         List<NodeSource> sources = new ArrayList<>();
@@ -160,8 +161,8 @@ public final class GaussRule {
 
     /** Ziv's loop for one source: its row, and with {@code mirror} the row of the negated node. */
     private static Decided[] decide(TableDef t, TableKind.Quadrature q, NodeSource s, boolean mirror)
-            throws UndecidedException, OutOfRangeException {
-        int prec = TableEvaluator.startBits(t.format());
+            throws PrecisionCapException, OutOfRangeException {
+        int prec = PrecisionLoop.chooseStartBits(t.format());
         while (true) {
             try {
                 Enclosure e = s.enclose(prec);
@@ -173,12 +174,9 @@ public final class GaussRule {
             } catch (NeedsPrecision ignored) {
                 // the loop below raises the precision
             }
-            if (prec >= t.capBits()) {
-                throw new UndecidedException("table " + t.name() + ": the precision cap of " + t.capBits()
-                        + " bits cannot decide a node of the " + q.family().describe() + " near x = "
-                        + approximateNode(s) + " (raise precision_cap_bits, or an entry may be an exact rounding boundary)");
-            }
-            prec = Math.min(t.capBits(), 2 * prec);
+            prec = PrecisionLoop.raise(prec, t.capBits(), () -> "table " + t.name() + ": the precision cap of " + t.capBits()
+                    + " bits cannot decide a node of the " + q.family().describe() + " near x = "
+                    + approximateNode(s) + " (raise precision_cap_bits, or an entry may be an exact rounding boundary)");
         }
     }
 
@@ -289,13 +287,13 @@ public final class GaussRule {
     }
 
     /** Rigorous part of the count: consecutive node enclosures, ascending, must be disjoint. */
-    private static void checkDisjoint(TableDef t, List<Decided> rows) throws UndecidedException {
+    private static void checkDisjoint(TableDef t, List<Decided> rows) throws PrecisionCapException {
         for (int i = 1; i < rows.size(); i++) {
             Ball left = rows.get(i - 1).enclosure().nodeBall(rows.get(i - 1).precBits() + 20);
             Ball right = rows.get(i).enclosure().nodeBall(rows.get(i).precBits() + 20);
             if (left.upper().compareTo(right.lower()) >= 0) {
-                throw new UndecidedException("table " + t.name() + ": the nodes near x = " + approximate(left)
-                        + " and x = " + approximate(right) + " could not be separated (two seeds led to one zero)");
+                throw new PrecisionCapException("table " + t.name() + ": the nodes near x = " + approximate(left)
+                        + " and x = " + approximate(right) + " could not be separated (two seeds led to one zero)", t.capBits());
             }
         }
     }

@@ -17,6 +17,8 @@ import dev.odetab.series.Continuation;
 import dev.odetab.series.FastWalk;
 import dev.odetab.series.GridWalk;
 import dev.odetab.series.Jet;
+import dev.odetab.series.PrecisionCapException;
+import dev.odetab.series.PrecisionLoop;
 import dev.odetab.ode.SingularCrossingException;
 import java.math.BigDecimal;
 import java.math.MathContext;
@@ -134,7 +136,7 @@ final class FastTier {
      * ({@link GridWalk}, {@link Continuation}; sequential and deterministic), at
      * {@link FastWalk#START_BITS} bits and again at doubled precision for the starts whose balls
      * are wider than 2^−115 of the jet's size (long walks on oscillating solutions lose bits to
-     * the wrapping effect, METHODS §4), up to the table's cap. Each future is completed as soon as
+     * the wrapping effect, METHODS §4), up to the table's cap ({@link PrecisionLoop#runBatch}). Each future is completed as soon as
      * its start is final, so chunks can run while the walk goes on; all complete with null when a
      * walk would cross a singular point (the BigDecimal tier then reports it with the table's own
      * points), and exceptionally when a normalization constant fails.
@@ -149,42 +151,53 @@ final class FastTier {
         for (int c = 0; c < chunks; c++) {
             wanted.add(c);
         }
-        int prec = FastWalk.START_BITS;
+        if (wanted.isEmpty()) {
+            return;
+        }
         try {
-            while (!wanted.isEmpty()) {
-                List<Rational> pts = new ArrayList<>();
-                for (int c : wanted) {
-                    pts.add(xs.get(c));
-                }
-                List<Integer> wider = new ArrayList<>();
-                boolean last = 2 * prec > t.capBits();
-                // In grid order, so that chunk k waits only for the walk up to its own start: a long
-                // jump to the first start, then from each start to the next.
-                Jet first = GridWalk.enclose(t.function(), List.of(pts.get(0)), prec).get(0);
-                CarriedState state = CarriedState.of(t.function().equation().reduced(), pts.get(0), first);
-                for (int k = 0; k < pts.size(); k++) {
-                    if (Thread.currentThread().isInterrupted()) {
-                        throw new CancellationException("table evaluation stopped");
-                    }
-                    if (k > 0) {
-                        state = Continuation.walk(t.function().equation(), state, pts.get(k), prec).state();
-                    }
-                    Jet jet = k == 0 ? first : state.jet();
-                    int c = wanted.get(k);
-                    if (narrow(jet) || last) {
-                        starts.get(c).complete(jet);
-                    } else {
-                        wider.add(c);
-                    }
-                }
-                wanted = wider;
-                prec *= 2;
-            }
+            PrecisionLoop.<Integer, ExprException, RuntimeException>runBatch(wanted,
+                    (pending, prec) -> walkStarts(t, xs, pending, starts, prec), FastWalk.START_BITS, t.capBits(),
+                    still -> "table " + t.name() + ": " + still.size() + " chunk start(s) still wide at the precision cap");
         } catch (SingularCrossingException ex) {
             starts.forEach(f -> f.complete(null));
-        } catch (ExprException | RuntimeException ex) {
+        } catch (ExprException | PrecisionCapException | RuntimeException ex) {
             starts.forEach(f -> f.completeExceptionally(ex));
         }
+    }
+
+    /**
+     * One round of {@link #chunkStarts} at {@code prec} over the chunks {@code pending}: completes
+     * the starts that are narrow, and all of them when doubling would pass the cap (the last
+     * round: a wide start only costs the fast tier some entries); returns the others.
+     */
+    private static List<Integer> walkStarts(TableDef t, List<Rational> xs, List<Integer> pending, List<CompletableFuture<Jet>> starts,
+            int prec) throws ExprException {
+        List<Rational> pts = new ArrayList<>();
+        for (int c : pending) {
+            pts.add(xs.get(c));
+        }
+        List<Integer> wider = new ArrayList<>();
+        boolean last = 2 * prec > t.capBits();
+        // In grid order, so that chunk k waits only for the walk up to its own start: a long
+        // jump to the first start, then from each start to the next.
+        Jet first = GridWalk.enclose(t.function(), List.of(pts.get(0)), prec).get(0);
+        CarriedState state = CarriedState.of(t.function().equation().reduced(), pts.get(0), first);
+        for (int k = 0; k < pts.size(); k++) {
+            if (Thread.currentThread().isInterrupted()) {
+                throw new CancellationException("table evaluation stopped");
+            }
+            if (k > 0) {
+                state = Continuation.walk(t.function().equation(), state, pts.get(k), prec).state();
+            }
+            Jet jet = k == 0 ? first : state.jet();
+            int c = pending.get(k);
+            if (narrow(jet) || last) {
+                starts.get(c).complete(jet);
+            } else {
+                wider.add(c);
+            }
+        }
+        return wider;
     }
 
     /** Heuristic: both radii below 2^−115 of max(|y|, |y'|). */

@@ -6,7 +6,8 @@ import dev.odetab.tables.OutOfRangeException;
 import dev.odetab.tables.TableDef;
 import dev.odetab.tables.TableEvaluator;
 import dev.odetab.tables.TableResult;
-import dev.odetab.tables.UndecidedException;
+import dev.odetab.series.PrecisionCapException;
+import dev.odetab.series.PrecisionLoop;
 import dev.odetab.tables.rows.RowStore;
 
 import dev.odetab.base.Progress;
@@ -57,11 +58,11 @@ public final class ValuesEvaluator {
      * reported as rows are decided. The chunks are fixed by the table alone ({@link #chunkSize}),
      * and each chunk is a deterministic computation, so the result does not depend on the pool.
      *
-     * @throws UndecidedException when the table's precision cap cannot decide some entries (named)
+     * @throws PrecisionCapException when the table's precision cap cannot decide some entries (named)
      * @throws OutOfRangeException when a fixed-point entry is out of range and the policy is "error"
      */
     public static TableResult evaluate(TableDef t, Progress progress, ExecutorService pool)
-            throws ExprException, UndecidedException, OutOfRangeException {
+            throws ExprException, PrecisionCapException, OutOfRangeException {
         int n = t.grid().size();
         progress.start(t.name(), n);
         int size = chunkSize(t);
@@ -154,9 +155,9 @@ public final class ValuesEvaluator {
     /**
      * Rigorous: rows s … e−1. Exact rows for polynomials at exact points; then the fast tier
      * ({@link FastTier}) from the chunk's start when there is one; then BigDecimal walks at doubling precision for the
-     * rows still undecided, up to the cap.
+     * rows still undecided, up to the cap ({@link PrecisionLoop#runBatch}).
      */
-    private static Chunk chunk(TableDef t, int s, int e, Jet start) throws ExprException, UndecidedException, OutOfRangeException {
+    private static Chunk chunk(TableDef t, int s, int e, Jet start) throws ExprException, PrecisionCapException, OutOfRangeException {
         int len = e - s;
         List<Column> cols = t.columns();
         Entry[][] entries = new Entry[len][];
@@ -191,66 +192,85 @@ public final class ValuesEvaluator {
             maxPrec = Math.max(maxPrec, fast.precBits());
             pending = fast.undecided();
         }
-        int prec = TableEvaluator.startBits(t.format());
-        while (!pending.isEmpty()) {
-            List<Rational> pts = new ArrayList<>();
-            for (int i : pending) {
-                pts.add(grid.center(i));
-            }
-            List<Jet> jets = poly.isPresent() ? null : GridWalk.enclose(t.function(), pts, prec);
-            List<Integer> still = new ArrayList<>();
-            for (int k = 0; k < pending.size(); k++) {
-                int i = pending.get(k);
-                Ball node = grid.node(i, prec);
-                Jet jet = poly.isPresent() ? polynomialJet(poly.get(), node, prec)
-                        : grid.exactPoint(i) != null ? jets.get(k) : nodeJet(t.function(), pts.get(k), jets.get(k), node, prec);
-                Entry[] row = new Entry[cols.size()];
-                BigDecimal rowRel = BigDecimal.ZERO;
-                boolean decided = true;
-                Ball[] derivs = null;
-                for (int c = 0; c < cols.size() && decided; c++) {
-                    Column col = cols.get(c);
-                    Ball b;
-                    if (col.isPoint()) {
-                        b = node;
-                    } else {
-                        if (derivs == null) {
-                            derivs = derivatives(t.function(), pts.get(k), jet, maxOrder(cols), prec);
-                        }
-                        b = col.taylor() ? derivs[col.order()].divide(factorial(col.order()), prec) : derivs[col.order()];
-                    }
-                    Optional<Entry> en = Rounding.decide(b, t.target());
-                    if (en.isEmpty()) {
-                        decided = false;
-                    } else {
-                        row[c] = en.get();
-                        rowRel = col.isPoint() ? rowRel : rowRel.max(relative(b));
-                    }
-                }
-                if (decided) {
-                    for (int c = 0; c < cols.size(); c++) {
-                        row[c] = checked(t, pts.get(k), cols.get(c), row[c]);
-                    }
-                    entries[i - s] = row;
-                    maxRel = maxRel.max(rowRel);
-                    maxPrec = Math.max(maxPrec, prec);
-                } else {
-                    still.add(i);
-                }
-            }
-            pending = still;
-            if (!pending.isEmpty()) {
-                if (prec >= t.capBits()) {
-                    throw new UndecidedException(undecidedMessage(t, pending));
-                }
-                prec = Math.min(t.capBits(), 2 * prec);
-            }
+        Stats stats = new Stats(maxRel, maxPrec);
+        if (!pending.isEmpty()) {
+            PrecisionLoop.<Integer, ExprException, OutOfRangeException>runBatch(pending,
+                    (undecided, prec) -> decide(t, s, undecided, poly, entries, stats, prec),
+                    PrecisionLoop.chooseStartBits(t.format()), t.capBits(), still -> undecidedMessage(t, still));
         }
         TableResult.Row[] rows = new TableResult.Row[len];
         for (int i = s; i < e; i++) {
             rows[i - s] = new TableResult.Row(grid.exactPoint(i), Arrays.asList(entries[i - s]));
         }
-        return new Chunk(rows, maxRel, maxPrec);
+        return new Chunk(rows, stats.maxRel, stats.maxPrec);
+    }
+
+    /** The largest relative radius and working precision of the rows decided so far. */
+    private static final class Stats {
+        private BigDecimal maxRel;
+        private int maxPrec;
+
+        Stats(BigDecimal maxRel, int maxPrec) {
+            this.maxRel = maxRel;
+            this.maxPrec = maxPrec;
+        }
+    }
+
+    /**
+     * Rigorous: one round of the precision loop over the rows {@code pending} (indices from the
+     * table's start; {@code entries} from the chunk's start {@code s}): walks to their points at
+     * {@code prec}, keeps the rows whose every entry is decided and returns the others.
+     */
+    private static List<Integer> decide(TableDef t, int s, List<Integer> pending, Optional<Poly> poly, Entry[][] entries,
+            Stats stats, int prec) throws ExprException, OutOfRangeException {
+        List<Column> cols = t.columns();
+        Grid grid = t.grid();
+        List<Rational> pts = new ArrayList<>();
+        for (int i : pending) {
+            pts.add(grid.center(i));
+        }
+        List<Jet> jets = poly.isPresent() ? null : GridWalk.enclose(t.function(), pts, prec);
+        List<Integer> still = new ArrayList<>();
+        for (int k = 0; k < pending.size(); k++) {
+            int i = pending.get(k);
+            Ball node = grid.node(i, prec);
+            Jet jet = poly.isPresent() ? polynomialJet(poly.get(), node, prec)
+                    : grid.exactPoint(i) != null ? jets.get(k) : nodeJet(t.function(), pts.get(k), jets.get(k), node, prec);
+            Entry[] row = new Entry[cols.size()];
+            BigDecimal rowRel = BigDecimal.ZERO;
+            boolean decided = true;
+            Ball[] derivs = null;
+            for (int c = 0; c < cols.size() && decided; c++) {
+                Column col = cols.get(c);
+                Ball b;
+                if (col.isPoint()) {
+                    b = node;
+                } else {
+                    if (derivs == null) {
+                        derivs = derivatives(t.function(), pts.get(k), jet, maxOrder(cols), prec);
+                    }
+                    b = col.taylor() ? derivs[col.order()].divide(factorial(col.order()), prec) : derivs[col.order()];
+                }
+                Optional<Entry> en = Rounding.decide(b, t.target());
+                if (en.isEmpty()) {
+                    decided = false;
+                } else {
+                    row[c] = en.get();
+                    rowRel = col.isPoint() ? rowRel : rowRel.max(relative(b));
+                }
+            }
+            if (decided) {
+                for (int c = 0; c < cols.size(); c++) {
+                    row[c] = checked(t, pts.get(k), cols.get(c), row[c]);
+                }
+                entries[i - s] = row;
+                stats.maxRel = stats.maxRel.max(rowRel);
+                stats.maxPrec = Math.max(stats.maxPrec, prec);
+            } else {
+                still.add(i);
+            }
+        }
+        return still;
     }
 
     /** Value and slope of an exact polynomial over a ball (Horner in ball arithmetic). */

@@ -6,7 +6,8 @@ import dev.odetab.tables.OutOfRangeException;
 import dev.odetab.tables.TableDef;
 import dev.odetab.tables.TableEvaluator;
 import dev.odetab.tables.TableResult;
-import dev.odetab.tables.UndecidedException;
+import dev.odetab.series.PrecisionCapException;
+import dev.odetab.series.PrecisionLoop;
 import dev.odetab.series.LocalExpansion;
 
 import dev.odetab.base.ExprException;
@@ -24,7 +25,6 @@ import dev.odetab.series.Continuation;
 import dev.odetab.series.FunctionEvaluator;
 import dev.odetab.series.Jet;
 import dev.odetab.series.LocalSeries;
-import dev.odetab.series.PrecisionCapException;
 import dev.odetab.series.Start;
 import dev.odetab.series.StepChooser;
 import java.math.BigDecimal;
@@ -62,7 +62,7 @@ import java.util.Optional;
  * iteration stops when every point of X rounds to the same entry and the other columns,
  * enclosed over X, decide too (Ziv, METHODS §5); when X stops shrinking the precision is
  * doubled, the state at that cell start being recomputed from the normalization point, up to
- * the table's cap (then {@link UndecidedException}, naming the zero).
+ * the table's cap (then {@link PrecisionCapException}, naming the zero).
  *
  * <p><b>Exact zeros.</b> A ball of g with radius 0 and midpoint 0 proves a zero at that
  * rational point: at the normalization point when the normalization value is exactly 0, and
@@ -108,7 +108,7 @@ public final class ZeroFinder {
         this.gPoly = poly == null ? null : z.ofDerivative() ? poly.derivative() : poly;
         this.direction = z.to().compareTo(z.from());
         this.gName = z.ofDerivative() ? "y'" : "y";
-        this.precBits = TableEvaluator.startBits(t.format());
+        this.precBits = PrecisionLoop.chooseStartBits(t.format());
         this.maxPrecBits = precBits;
     }
 
@@ -117,16 +117,16 @@ public final class ZeroFinder {
      * ends included), the first {@code count} of them when a count is given, each row
      * correctly rounded (class comment).
      *
-     * @throws UndecidedException when the precision cap cannot isolate or decide a zero
+     * @throws PrecisionCapException when the precision cap cannot isolate or decide a zero
      * @throws OutOfRangeException when the search holds no zero, fewer than
      *     {@code count}, or g vanishes identically; or an entry is out of a fixed-point range
      */
-    public static TableResult find(TableDef t, TableKind.Zeros z) throws ExprException, UndecidedException,
+    public static TableResult find(TableDef t, TableKind.Zeros z) throws ExprException, PrecisionCapException,
             OutOfRangeException {
         return new ZeroFinder(t, z).walk();
     }
 
-    private TableResult walk() throws ExprException, UndecidedException, OutOfRangeException {
+    private TableResult walk() throws ExprException, PrecisionCapException, OutOfRangeException {
         Rational from = search.from();
         Rational to = search.to();
         if (gPoly != null && gPoly.isZero()) {
@@ -249,7 +249,7 @@ public final class ZeroFinder {
      * The sign of g at an end of the search interval, 0 for a proven exact zero; raises the
      * precision (from the normalization point) while the enclosure contains 0 but is not exact.
      */
-    private int endSign(LocalExpansion here, String which) throws ExprException, UndecidedException {
+    private int endSign(LocalExpansion here, String which) throws ExprException, PrecisionCapException {
         Ball g = g(here.at(Rational.ZERO));
         int bits = here.precBits();
         boolean fresh = false;
@@ -323,13 +323,10 @@ public final class ZeroFinder {
         }
     }
 
-    /** Twice the precision, at most the cap; at the cap, the table cannot be decided. */
-    private int higher(int bits, String what) throws UndecidedException {
-        if (bits >= table.capBits()) {
-            throw new UndecidedException("table " + table.name() + ": the precision cap of " + table.capBits()
-                    + " bits cannot " + what + " (raise precision_cap_bits)");
-        }
-        int next = Math.min(table.capBits(), 2 * bits);
+    /** Twice the precision, at most the cap ({@link PrecisionLoop#raise}); at the cap, the table cannot be decided. */
+    private int higher(int bits, String what) throws PrecisionCapException {
+        int next = PrecisionLoop.raise(bits, table.capBits(), () -> "table " + table.name() + ": the precision cap of "
+                + table.capBits() + " bits cannot " + what + " (raise precision_cap_bits)");
         maxPrecBits = Math.max(maxPrecBits, next);
         return next;
     }
@@ -337,7 +334,7 @@ public final class ZeroFinder {
     // ---- one stretch where g is monotone ----------------------------------------------------
 
     /** The zero of a finished stretch, if its end signs say there is one (0 marks an exact zero at an end of the search). */
-    private void close(List<Cell> stretch, int signStart, int signEnd) throws ExprException, UndecidedException,
+    private void close(List<Cell> stretch, int signStart, int signEnd) throws ExprException, PrecisionCapException,
             OutOfRangeException {
         if (signStart == 0 || done()) {
             return;
@@ -349,7 +346,7 @@ public final class ZeroFinder {
         }
     }
 
-    private void refine(List<Cell> stretch, int signStart) throws ExprException, UndecidedException,
+    private void refine(List<Cell> stretch, int signStart) throws ExprException, PrecisionCapException,
             OutOfRangeException {
         Rational first = stretch.get(0).a();
         Rational last = stretch.get(stretch.size() - 1).b();
@@ -423,7 +420,7 @@ public final class ZeroFinder {
     }
 
     /** Interval Newton steps on x with the series at {@code local}, raising the precision when x stops shrinking. */
-    private void newton(Bracket x, LocalExpansion local) throws ExprException, UndecidedException,
+    private void newton(Bracket x, LocalExpansion local) throws ExprException, PrecisionCapException,
             OutOfRangeException {
         LocalExpansion loc = local;
         boolean fresh = false;
@@ -503,7 +500,7 @@ public final class ZeroFinder {
     }
 
     /** Records the zero at the rational q, proven exact; the other columns by the precision loop of {@link FunctionEvaluator#entry}. */
-    private void addExact(Rational q) throws ExprException, UndecidedException,
+    private void addExact(Rational q) throws ExprException, PrecisionCapException,
             OutOfRangeException {
         List<Entry> entries = new ArrayList<>();
         for (Column col : table.columns()) {
@@ -518,9 +515,9 @@ public final class ZeroFinder {
                     maxPrecBits = Math.max(maxPrecBits, d.precBits());
                     e = d.entry();
                 } catch (PrecisionCapException ex) {
-                    throw new UndecidedException("table " + table.name() + ": the precision cap of " + table.capBits()
+                    throw new PrecisionCapException("table " + table.name() + ": the precision cap of " + table.capBits()
                             + " bits cannot decide the " + col.name() + " at the zero x = " + q.toDecimalOrFraction()
-                            + " (raise precision_cap_bits)");
+                            + " (raise precision_cap_bits)", table.capBits());
                 }
             }
             entries.add(checked(col, e, q));
