@@ -73,6 +73,14 @@ public final class ReferenceCheck {
         for (Path f : files) {
             r.add(file(f));
         }
+        Path zeros = dir.resolve("zeros");
+        if (Files.isDirectory(zeros)) {
+            try (Stream<Path> s = Files.list(zeros)) {
+                for (Path f : s.filter(p -> p.toString().endsWith(".csv")).sorted().toList()) {
+                    r.add(zerosFile(f));
+                }
+            }
+        }
         r.addAll(identities());
         r.add(independent());
         return r;
@@ -96,6 +104,78 @@ public final class ReferenceCheck {
         return new Outcome("cross-check of BallFunctions", "big-math 2.3.2, an independent implementation", all.size(), failures, worst);
     }
 
+    /** One row of a zeros file: the k-th zero of the function (of = value) or of its derivative. */
+    private record ZeroRow(String where, String function, boolean ofDerivative, int k, BigDecimal zero) {
+    }
+
+    /**
+     * Rigorous: a zeros file ({@code function,of,k,zero,other,source}). A zero z written with d
+     * digits passes when the function (or its derivative) has strict opposite signs, proven by
+     * enclosures, at z − ½ unit and z + ½ unit of its last digit: a zero lies in that interval
+     * (intermediate value theorem). Neither the index k nor the {@code other} column is proven
+     * here (the slow AiryZerosReferenceDataTest re-derives both); the outcome's worst figure is
+     * not defined (NaN).
+     */
+    private static Outcome zerosFile(Path f) throws IOException, DataError {
+        Map<String, List<ZeroRow>> groups = new java.util.LinkedHashMap<>();
+        java.util.Set<String> sources = new java.util.LinkedHashSet<>();
+        for (DataLine d : dataLines(f, "zeros/" + f.getFileName(), "function,of,k,zero,other,source")) {
+            String where = d.where();
+            String[] c = d.fields();
+            if (!c[1].equals("derivative") && !c[1].equals("value")) {
+                throw new DataError(where + ": 'of' must be value or derivative, got '" + c[1] + "'");
+            }
+            try {
+                ZeroRow row = new ZeroRow(where, c[0], c[1].equals("derivative"), Integer.parseInt(c[2]), new BigDecimal(c[3]));
+                groups.computeIfAbsent(c[0], k -> new ArrayList<>()).add(row);
+            } catch (NumberFormatException e) {
+                throw new DataError(where + ": " + e.getMessage());
+            }
+            sources.add(c[5]);
+        }
+        Tally tally = new Tally();
+        for (List<ZeroRow> group : groups.values()) {
+            FunctionDef fn = define(group.get(0).function(), "", group.get(0).where());
+            int digits = group.stream().mapToInt(r -> r.zero().precision()).max().orElse(20);
+            runGroup(group, digits, ZeroRow::where, (pending, prec) -> judgeZeros(fn, pending, prec, tally));
+        }
+        tally.worst = Double.NaN;
+        return new Outcome("zeros/" + f.getFileName(), String.join("; ", sources), tally.count, tally.failures, tally.worst);
+    }
+
+    /** One round: judges the zeros whose two end enclosures exclude 0 (every zero at the cap); returns the others. */
+    private static List<ZeroRow> judgeZeros(FunctionDef fn, List<ZeroRow> pending, int prec, Tally tally) throws DataError {
+        List<Rational> ends = new ArrayList<>();
+        for (ZeroRow row : pending) {
+            Rational half = Rational.of(row.zero().ulp()).divide(Rational.TWO);
+            ends.add(Rational.of(row.zero()).subtract(half));
+            ends.add(Rational.of(row.zero()).add(half));
+        }
+        List<Jet> jets;
+        try {
+            jets = GridWalk.enclose(fn, ends, prec);
+        } catch (ExprException e) {
+            throw new DataError(pending.get(0).where() + ": " + e.getMessage());
+        }
+        List<ZeroRow> still = new ArrayList<>();
+        for (int i = 0; i < pending.size(); i++) {
+            ZeroRow row = pending.get(i);
+            Ball lo = row.ofDerivative() ? jets.get(2 * i).derivative() : jets.get(2 * i).value();
+            Ball hi = row.ofDerivative() ? jets.get(2 * i + 1).derivative() : jets.get(2 * i + 1).value();
+            boolean decided = !lo.containsZero() && !hi.containsZero();
+            if (!decided && prec < CAP_BITS) {
+                still.add(row);
+                continue;
+            }
+            tally.count++;
+            if (!decided || lo.mid().signum() == hi.mid().signum()) {
+                tally.failures.add(row.where() + ": zero " + row.k() + " of " + row.function() + (row.ofDerivative() ? "'" : "")
+                        + ": no proven sign change between the ends of " + row.zero() + " ± ½ unit of its last digit");
+            }
+        }
+        return still;
+    }
+
     /** One row of a reference file. */
     private record Row(String where, String function, String params, Rational x, boolean derivative, BigDecimal value, String source) {
     }
@@ -103,19 +183,11 @@ public final class ReferenceCheck {
     private static final int CAP_BITS = 1 << 15;
 
     private static Outcome file(Path f) throws IOException, DataError {
-        List<String> lines = Files.readAllLines(f, StandardCharsets.UTF_8);
         Map<String, List<Row>> groups = new java.util.LinkedHashMap<>();
         java.util.Set<String> sources = new java.util.LinkedHashSet<>();
-        for (int ln = 0; ln < lines.size(); ln++) {
-            String line = lines.get(ln);
-            if (line.startsWith("#") || line.startsWith("function,") || line.isBlank()) {
-                continue;
-            }
-            String where = f.getFileName() + ":" + (ln + 1);
-            String[] c = line.split(",", -1);
-            if (c.length != 6) {
-                throw new DataError(where + ":1: expected 6 fields (function,parameters,x,quantity,value,source), found " + c.length);
-            }
+        for (DataLine d : dataLines(f, f.getFileName().toString(), "function,parameters,x,quantity,value,source")) {
+            String where = d.where();
+            String[] c = d.fields();
             if (!c[3].equals("derivative") && !c[3].equals("value")) {
                 throw new DataError(where + ": quantity must be value or derivative, got '" + c[3] + "'");
             }
@@ -131,15 +203,44 @@ public final class ReferenceCheck {
         for (List<Row> group : groups.values()) {
             FunctionDef fn = define(group.get(0).function(), group.get(0).params(), group.get(0).where());
             int digits = group.stream().mapToInt(r -> r.value().precision()).max().orElse(20);
-            try {
-                PrecisionLoop.runBatch(group, (pending, prec) -> judge(fn, pending, prec, tally), (int) Math.ceil((digits + 10) * 3.33),
-                        CAP_BITS, still -> "the precision cap of " + CAP_BITS + " bits cannot judge " + still.get(0).where());
-            } catch (PrecisionCapException e) {
-                throw new DataError(e.getMessage());
-            }
+            runGroup(group, digits, Row::where, (pending, prec) -> judge(fn, pending, prec, tally));
         }
         // one source per file; where rows cite different equations of it, all are named
         return new Outcome(f.getFileName().toString(), String.join("; ", sources), tally.count, tally.failures, tally.worst);
+    }
+
+    /** A data line of a reference file: where it is ({@code file:line}) and its six fields. */
+    private record DataLine(String where, String[] fields) {
+    }
+
+    /** The data lines of a reference file (comments, the header and blank lines skipped), each with six fields. */
+    private static List<DataLine> dataLines(Path f, String shown, String header) throws IOException, DataError {
+        List<String> lines = Files.readAllLines(f, StandardCharsets.UTF_8);
+        List<DataLine> r = new ArrayList<>();
+        for (int ln = 0; ln < lines.size(); ln++) {
+            String line = lines.get(ln);
+            if (line.startsWith("#") || line.startsWith("function,") || line.isBlank()) {
+                continue;
+            }
+            String where = shown + ":" + (ln + 1);
+            String[] c = line.split(",", -1);
+            if (c.length != 6) {
+                throw new DataError(where + ":1: expected 6 fields (" + header + "), found " + c.length);
+            }
+            r.add(new DataLine(where, c));
+        }
+        return r;
+    }
+
+    /** Runs the precision loop over one function's rows, from about {@code digits} + 10 digits up to the cap. */
+    private static <R> void runGroup(List<R> group, int digits, java.util.function.Function<R, String> where,
+            PrecisionLoop.Round<R, DataError, RuntimeException> round) throws DataError {
+        try {
+            PrecisionLoop.runBatch(group, round, (int) Math.ceil((digits + 10) * 3.33),
+                    CAP_BITS, still -> "the precision cap of " + CAP_BITS + " bits cannot judge " + where.apply(still.get(0)));
+        } catch (PrecisionCapException e) {
+            throw new DataError(e.getMessage());
+        }
     }
 
     /** What the rows judged so far found. */

@@ -35,7 +35,7 @@ final class CheckCommand implements Callable<Integer> {
             List<ReferenceCheck.Outcome> outcomes = ReferenceCheck.run(data);
             int failed = 0;
             for (ReferenceCheck.Outcome o : outcomes) {
-                String worst = o.name().startsWith("identity") ? "" : String.format(Locale.ROOT,
+                String worst = o.name().startsWith("identity") || Double.isNaN(o.worstUnits()) ? "" : String.format(Locale.ROOT,
                         ", worst %.3f units of the reference's last digit", o.worstUnits());
                 out.println((o.passed() ? "PASS  " : "FAIL  ") + o.name() + "  (" + o.source() + "): " + o.count() + " values" + worst);
                 for (String f : o.failures()) {

@@ -36,7 +36,7 @@ class CheckCommandTest {
         }) {
             assertTrue(r.out().contains(line + "\n") || r.out().contains(line + ", worst"), line + "\n" + r.out());
         }
-        assertTrue(r.out().endsWith("odetab check: all 13 sources pass\n"), r.out());
+        assertTrue(r.out().endsWith("odetab check: all 14 sources pass\n"), r.out());
     }
 
     @Test
@@ -70,5 +70,34 @@ class CheckCommandTest {
         CliRunner.Result r = CliRunner.run("check", "--data", dir.toString());
         assertEquals(2, r.code());
         assertEquals("odetab: bad.csv:2:1: expected 6 fields (function,parameters,x,quantity,value,source), found 4\n", r.err());
+    }
+
+    @Test
+    void theShippedZerosAreChecked() {
+        CliRunner.Result r = CliRunner.run("check");
+        assertEquals(0, r.code(), r.out() + r.err());
+        assertTrue(r.out().contains("PASS  zeros/airy-zeros-apfloat-1.15.0.csv  (apfloat 1.15.0): 200 values\n"), r.out());
+    }
+
+    @Test
+    void aWrongZeroFails(@TempDir Path dir) throws Exception {
+        // a_1 of Ai = -2.3381074104597670384891972524467… (the shipped apfloat zeros file): right to 20 digits, then
+        // with its 20th digit changed by one, which moves the interval ± half a unit off the zero
+        Files.createDirectories(dir.resolve("zeros"));
+        Files.writeString(dir.resolve("zeros/planted.csv"), "function,of,k,zero,other,source\n"
+                + "airy-ai,value,1,-2.3381074104597670385,0.7012108227206913625,apfloat 1.15.0\n"
+                + "airy-ai,value,1,-2.3381074104597670386,0.7012108227206913625,planted error\n");
+        String out = failingCheck(dir);
+        assertTrue(out.contains("FAIL  zeros/planted.csv  (apfloat 1.15.0; planted error): 2 values\n"), out);
+        assertTrue(out.contains("zeros/planted.csv:3: zero 1 of airy-ai: no proven sign change between the ends of "
+                + "-2.3381074104597670386 ± ½ unit of its last digit"), out);
+        assertTrue(!out.contains("planted.csv:2:"), out);
+    }
+
+    /** The output of a check of {@code dir} that must fail with exit 1. */
+    private static String failingCheck(Path dir) {
+        CliRunner.Result r = CliRunner.run("check", "--data", dir.toString());
+        assertEquals(1, r.code(), r.out() + r.err());
+        return r.out();
     }
 }
