@@ -13,7 +13,7 @@ import picocli.CommandLine.Command;
  */
 @Command(name = "odetab", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Correctly rounded tables of solutions of second-order linear equations, with proven error bounds.",
-        subcommands = {BuildCommand.class, EvalCommand.class, InspectCommand.class, AuditCommand.class, CheckCommand.class,
+        subcommands = {BuildCommand.class, EvalCommand.class, InspectCommand.class, AuditCommand.class, CheckCommand.class, FamiliesCommand.class,
             CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
     public static final int OK = 0;

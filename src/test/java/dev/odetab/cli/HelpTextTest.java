@@ -25,4 +25,14 @@ class HelpTextTest {
         String h = help("build");
         assertTrue(h.contains("tables, and the chunks of a long table, run in parallel; the bytes never depend on N"), h);
     }
+
+    @Test
+    void familiesListsEquationsAndParameterRanges() {
+        CliRunner.Result r = CliRunner.run("families");
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().startsWith("airy-ai  Airy function Ai(x) (DLMF 9.2)\n    equation   y'' - x*y = 0\n    parameters none\n"), r.out());
+        assertTrue(r.out().contains("laguerre-l  generalized Laguerre polynomial L_n^(alpha)(x) (DLMF 18.3, 18.8)\n"
+                + "    equation   x*y'' + (alpha + 1 - x)*y' + n*y = 0\n"), r.out());
+        assertTrue(r.out().contains("    alpha (optional, default 0): "), r.out());
+    }
 }

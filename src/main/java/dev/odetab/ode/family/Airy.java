@@ -36,6 +36,11 @@ public final class Airy implements Family {
     }
 
     @Override
+    public String equation() {
+        return "y'' - x*y = 0";
+    }
+
+    @Override
     public String title() {
         return bi ? "Airy function Bi(x) (DLMF 9.2)" : "Airy function Ai(x) (DLMF 9.2)";
     }

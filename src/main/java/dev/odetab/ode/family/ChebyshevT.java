@@ -20,6 +20,11 @@ public final class ChebyshevT implements Family {
     }
 
     @Override
+    public String equation() {
+        return "(1 - x^2)*y'' - x*y' + n^2*y = 0";
+    }
+
+    @Override
     public String title() {
         return "Chebyshev polynomial of the first kind T_n(x) (DLMF 18.3, 18.8)";
     }

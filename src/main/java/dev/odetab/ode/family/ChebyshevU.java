@@ -21,6 +21,11 @@ public final class ChebyshevU implements Family {
     }
 
     @Override
+    public String equation() {
+        return "(1 - x^2)*y'' - 3*x*y' + n*(n + 2)*y = 0";
+    }
+
+    @Override
     public String title() {
         return "Chebyshev polynomial of the second kind U_n(x) (DLMF 18.3, 18.8)";
     }

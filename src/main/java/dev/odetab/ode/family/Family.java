@@ -10,6 +10,13 @@ public interface Family {
     /** The name on the command line, e.g. {@code airy-ai}. */
     String name();
 
+    /**
+     * The equation in the notation of spec files, with the parameters by name (for example
+     * {@code y'' - 2*x*y' + 2*n*y = 0}); with the parameters' values it reads as the equation
+     * {@link #define} builds (FamilyEquationTest).
+     */
+    String equation();
+
     /** One line for help texts, with the DLMF section. */
     String title();
 

@@ -25,6 +25,11 @@ public final class GegenbauerC implements Family {
     }
 
     @Override
+    public String equation() {
+        return "(1 - x^2)*y'' - (2*lambda + 1)*x*y' + n*(n + 2*lambda)*y = 0";
+    }
+
+    @Override
     public String title() {
         return "Gegenbauer polynomial C_n^(lambda)(x) (DLMF 18.3, 18.8)";
     }

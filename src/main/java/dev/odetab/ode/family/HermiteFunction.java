@@ -23,6 +23,11 @@ public final class HermiteFunction implements Family {
     }
 
     @Override
+    public String equation() {
+        return "y'' + (2*n + 1 - x^2)*y = 0";
+    }
+
+    @Override
     public String title() {
         return "orthonormal Hermite function psi_n(x) (DLMF 18.3, 18.8)";
     }

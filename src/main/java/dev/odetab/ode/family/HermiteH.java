@@ -31,6 +31,11 @@ public final class HermiteH implements Family {
     }
 
     @Override
+    public String equation() {
+        return "y'' - 2*x*y' + 2*n*y = 0";
+    }
+
+    @Override
     public String title() {
         return "physicists' Hermite polynomial H_n(x), or Hermite function for non-integer n (DLMF 18.3, 18.8, 12.2)";
     }

@@ -21,6 +21,11 @@ public final class HermiteHe implements Family {
     }
 
     @Override
+    public String equation() {
+        return "y'' - x*y' + n*y = 0";
+    }
+
+    @Override
     public String title() {
         return "probabilists' Hermite polynomial He_n(x) (DLMF 18.3, 18.8)";
     }

@@ -25,6 +25,11 @@ public final class JacobiP implements Family {
     }
 
     @Override
+    public String equation() {
+        return "(1 - x^2)*y'' + (beta - alpha - (alpha + beta + 2)*x)*y' + n*(n + alpha + beta + 1)*y = 0";
+    }
+
+    @Override
     public String title() {
         return "Jacobi polynomial P_n^(alpha,beta)(x) (DLMF 18.3, 18.8)";
     }

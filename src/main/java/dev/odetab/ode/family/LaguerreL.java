@@ -24,6 +24,11 @@ public final class LaguerreL implements Family {
     }
 
     @Override
+    public String equation() {
+        return "x*y'' + (alpha + 1 - x)*y' + n*y = 0";
+    }
+
+    @Override
     public String title() {
         return "generalized Laguerre polynomial L_n^(alpha)(x) (DLMF 18.3, 18.8)";
     }

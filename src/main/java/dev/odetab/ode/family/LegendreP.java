@@ -21,6 +21,11 @@ public final class LegendreP implements Family {
     }
 
     @Override
+    public String equation() {
+        return "(1 - x^2)*y'' - 2*x*y' + n*(n + 1)*y = 0";
+    }
+
+    @Override
     public String title() {
         return "Legendre polynomial P_n(x) (DLMF 14.2, 18.3)";
     }

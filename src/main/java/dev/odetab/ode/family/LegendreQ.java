@@ -25,6 +25,11 @@ public final class LegendreQ implements Family {
     }
 
     @Override
+    public String equation() {
+        return "(1 - x^2)*y'' - 2*x*y' + n*(n + 1)*y = 0";
+    }
+
+    @Override
     public String title() {
         return "Legendre function of the second kind Q_n(x), -1 < x < 1 (DLMF 14.3, 14.5)";
     }

@@ -22,6 +22,11 @@ public final class Weber implements Family {
     }
 
     @Override
+    public String equation() {
+        return "y'' - (x^2/4 + a)*y = 0";
+    }
+
+    @Override
     public String title() {
         return "parabolic cylinder function U(a, x) (DLMF 12.2)";
     }
