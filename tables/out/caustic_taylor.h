@@ -7,7 +7,7 @@
  * normalization: y(0) = 1/(3^(2/3)*gamma(2/3)), y'(0) = -1/(3^(1/3)*gamma(1/3)) [defined in ../quillmere.toml]
  * grid:          from -8 to 4 step 0.5 (25 points)
  * format:        binary64, rounding nearest-even (roundTiesToEven: the nearest entry, ties to the even one)
- * error:         largest proven relative error before rounding 1.80e-21 (enclosure radius / |value|), working precision up to 93 bits
+ * error:         largest proven relative error before rounding 1.81e-21 (enclosure radius / |value|), working precision up to 93 bits
  * Every entry is the correct rounding of the exact value, decided from a proven enclosure.
  * Before using this table in a product, read "Cautions for firmware and safety-related use" in odetab's README.
  */

@@ -319,6 +319,13 @@ public final class ValuesEvaluator {
         return d;
     }
 
+    /** Three digits, rounded up: a proven bound printed in provenance must not shrink when it is shortened. */
+    private static final MathContext RELATIVE_UP = new MathContext(3, java.math.RoundingMode.CEILING);
+
+    /**
+     * Rigorous: an upper bound of rad/|y| for every y in b, to three digits rounded up (the
+     * radius itself when the ball reaches within a radius of 0).
+     */
     private static BigDecimal relative(Ball b) {
         if (b.rad().signum() == 0) {
             return BigDecimal.ZERO;
@@ -326,7 +333,7 @@ public final class ValuesEvaluator {
         if (b.mid().abs().compareTo(b.rad().multiply(BigDecimal.valueOf(2))) <= 0) {
             return b.rad();
         }
-        return b.rad().divide(b.mid().abs().subtract(b.rad()), new MathContext(3));
+        return b.rad().divide(b.mid().abs().subtract(b.rad()), RELATIVE_UP);
     }
 
     static Entry checked(TableDef t, Rational x, Column col, Entry e) throws OutOfRangeException {
