@@ -2,7 +2,6 @@ package dev.odetab.spec;
 
 import dev.odetab.base.InputError;
 
-import dev.odetab.expr.ConstExpr;
 import dev.odetab.numeric.Format;
 import dev.odetab.numeric.OutOfRange;
 import dev.odetab.numeric.Rational;
@@ -208,11 +207,11 @@ final class SpecTables {
         if (hasPoints) {
             TomlArray arr = t.getArray(List.of("points"));
             if (arr == null || arr.size() == 0) {
-                throw spec.error(child(base, "points"), "'points' must be a non-empty array of exact numbers as strings (\"0.1\", \"1/3\")");
+                throw spec.error(child(base, "points"), "'points' must be a non-empty array of exact numbers as strings (\"0.1\", \"1/3\", \"2^-3\")");
             }
             List<Rational> pts = new ArrayList<>();
             for (int i = 0; i < arr.size(); i++) {
-                pts.add(exact(arr, i, child(base, "points")));
+                pts.add(exact(arr, i));
             }
             return new Grid.Points(pts);
         }
@@ -327,37 +326,16 @@ final class SpecTables {
         return new Grid.Chebyshev(kind, (int) (long) (Long) nValue, from, to);
     }
 
-    private Rational exact(TomlArray arr, int i, List<String> key) throws InputError {
-        Object v = arr.get(i);
+    /** Entry i of an array of points ({@link ExactPoints}), errors located inside the entry's string. */
+    private Rational exact(TomlArray arr, int i) throws InputError {
         TomlPosition p = arr.inputPositionOf(i);
-        String where = spec.display() + ":" + p.line() + ":" + p.column();
-        if (v instanceof Long l) {
-            return Rational.of(l);
-        }
-        if (!(v instanceof String s)) {
-            throw new InputError(where, v instanceof Double
-                    ? "write the point as a string (\"0.1\") so that it stays exact; TOML floats are binary"
-                    : "a point must be an exact number written as a string (\"0.1\", \"1/3\")");
-        }
-        try {
-            return Rational.parse(s);
-        } catch (NumberFormatException e) {
-            throw new InputError(where, e.getMessage());
-        }
+        return ExactPoints.parse(arr.get(i), "point",
+                (column, message) -> new InputError(spec.display() + ":" + p.line() + ":" + (p.column() + column), message));
     }
 
+    /** The value of a key holding one exact point ({@link ExactPoints}). */
     private Rational exactValue(List<String> key, Object v) throws InputError {
-        if (v instanceof Long l) {
-            return Rational.of(l);
-        }
-        if (v instanceof Double) {
-            throw spec.error(key, "write the number as a string (\"0.1\") so that it stays exact; TOML floats are binary");
-        }
-        if (!(v instanceof String s)) {
-            throw spec.error(key, "expected an exact number written as a string (\"-10\", \"1/64\")");
-        }
-        ConstExpr e = spec.constant(key, s);
-        return e.exact().orElseThrow(() -> spec.error(key, "'" + s + "' is not an exact rational; grid points must be exact"));
+        return ExactPoints.parse(v, "number", (column, message) -> column == 0 ? spec.error(key, message) : spec.errorInString(key, column, message));
     }
 
     private List<Column> columns(List<String> base, TomlTable t, int terms) throws InputError {
