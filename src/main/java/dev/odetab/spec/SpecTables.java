@@ -4,7 +4,6 @@ import dev.odetab.base.InputError;
 
 import dev.odetab.numeric.Format;
 import dev.odetab.numeric.OutOfRange;
-import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.RoundingMode;
 import dev.odetab.numeric.Target;
 import dev.odetab.ode.FunctionDef;
@@ -29,10 +28,8 @@ import org.tomlj.TomlTable;
 final class SpecTables {
     static final Set<String> TABLE_KEYS = new LinkedHashSet<>(List.of("function", "kind", "grid", "points", "columns",
             "format", "rounding", "out_of_range", "precision_cap_bits", "outputs", "java_package", "terms", "search", "count", "of", "weight_underflow"));
-    static final Set<String> GRID_KEYS = new LinkedHashSet<>(List.of("from", "to", "step"));
     static final Set<String> KINDS = new LinkedHashSet<>(List.of("values", "zeros", "quadrature", "taylor"));
     static final Set<String> BUILT_IN_OUTPUTS = new LinkedHashSet<>(List.of("csv", "c", "java"));
-    static final int MAX_POINTS = 10_000_000;
     /**
      * Array entries one {@code java} output may hold. Its class initializer fills the arrays,
      * and a method's code must be shorter than 65536 bytes (JVMS §4.7.3, code_length): javac
@@ -80,6 +77,41 @@ final class SpecTables {
                         + " (a table has: " + String.join(", ", TABLE_KEYS) + ")");
             }
         }
+        String kind = kind(base, t);
+        int terms = kind.equals("taylor") ? terms(base, t) : 0;
+        if (!t.contains("function")) {
+            throw spec.error(base, "table '" + name + "' needs 'function' (a name from [functions] or a built-in family without parameters)");
+        }
+        String fname = string(base, t, "function");
+        FunctionDef f = function(child(base, "function"), fname);
+        boolean quadrature = kind.equals("quadrature");
+        Grid grid = quadrature || kind.equals("zeros") ? null : new SpecGrid(spec).grid(base, t);
+        TableKind tableKind = kind.equals("zeros") ? new SpecGrid(spec).zeroSearch(base, t) : null;
+        List<Column> columns = quadrature ? null
+                : kind.equals("zeros") && !t.contains("columns") ? List.of(Column.parse("x")) : columns(base, t, terms);
+        Target target = target(base, t);
+        int cap = capBits(base, t);
+        if (quadrature) {
+            SpecQuadrature.Parsed rule = new SpecQuadrature(spec, root).table(base, t, fname, f, target.format());
+            tableKind = rule.kind();
+            columns = rule.columns();
+        } else if (grid != null && grid.hasIrrationalPoints()) {
+            for (Column c : columns) {
+                if (c.order() >= 2 || c.taylor()) {
+                    throw spec.error(child(base, "columns"), "column '" + c.name()
+                            + "' needs exact grid points; a Chebyshev grid has irrational nodes (available there: x, value, derivative)");
+                }
+            }
+        }
+        if (tableKind == null) {
+            tableKind = terms > 0 ? new TableKind.Taylor(grid, terms) : new TableKind.Values(grid);
+        }
+        List<String> outputs = outputs(base, t, javaEntries(tableKind, columns, target.format()));
+        return new TableDef(name, fname, f, tableKind, columns, target, cap, outputs);
+    }
+
+    /** The table's kind ({@code values} when not given), after checking that the keys of other kinds are absent. */
+    private String kind(List<String> base, TomlTable t) throws InputError {
         String kind = t.contains("kind") ? string(base, t, "kind") : "values";
         if (!KINDS.contains(kind)) {
             throw spec.error(child(base, "kind"), "unknown kind '" + kind + "'" + Suggestions.hint(kind, KINDS)
@@ -93,29 +125,26 @@ final class SpecTables {
                 throw spec.error(child(base, zeroKey), "'" + zeroKey + "' belongs to zeros tables (kind = \"zeros\")");
             }
         }
-        int terms = 0;
-        if (kind.equals("taylor")) {
-            Object v = t.get(List.of("terms"));
-            if (v == null) {
-                throw spec.error(base, "a taylor table needs 'terms' (how many Taylor coefficients per center, 1 to " + Column.MAX_TAYLOR_TERMS + ")");
-            }
-            if (!(v instanceof Long l) || l < 1 || l > Column.MAX_TAYLOR_TERMS) {
-                throw spec.error(child(base, "terms"), "'terms' must be an integer from 1 to " + Column.MAX_TAYLOR_TERMS);
-            }
-            terms = (int) (long) l;
-        } else if (t.contains("terms")) {
+        if (!kind.equals("taylor") && t.contains("terms")) {
             throw spec.error(child(base, "terms"), "'terms' belongs to taylor tables (kind = \"taylor\")");
         }
-        if (!t.contains("function")) {
-            throw spec.error(base, "table '" + name + "' needs 'function' (a name from [functions] or a built-in family without parameters)");
+        return kind;
+    }
+
+    /** The {@code terms} of a taylor table: how many Taylor coefficients per center. */
+    private int terms(List<String> base, TomlTable t) throws InputError {
+        Object v = t.get(List.of("terms"));
+        if (v == null) {
+            throw spec.error(base, "a taylor table needs 'terms' (how many Taylor coefficients per center, 1 to " + Column.MAX_TAYLOR_TERMS + ")");
         }
-        String fname = string(base, t, "function");
-        FunctionDef f = function(child(base, "function"), fname);
-        boolean quadrature = kind.equals("quadrature");
-        Grid grid = quadrature || kind.equals("zeros") ? null : grid(base, t);
-        TableKind tableKind = kind.equals("zeros") ? zeroSearch(base, t) : null;
-        List<Column> columns = quadrature ? null
-                : kind.equals("zeros") && !t.contains("columns") ? List.of(Column.parse("x")) : columns(base, t, terms);
+        if (!(v instanceof Long l) || l < 1 || l > Column.MAX_TAYLOR_TERMS) {
+            throw spec.error(child(base, "terms"), "'terms' must be an integer from 1 to " + Column.MAX_TAYLOR_TERMS);
+        }
+        return (int) (long) l;
+    }
+
+    /** The entries' format, rounding mode and fixed-point policy (binary64, nearest-even, error when not given). */
+    private Target target(List<String> base, TomlTable t) throws InputError {
         Format format = Format.BinaryFormat.BINARY64;
         if (t.contains("format")) {
             String text = string(base, t, "format");
@@ -145,6 +174,11 @@ final class SpecTables {
                 default -> throw spec.error(child(base, "out_of_range"), "out_of_range must be \"error\" or \"saturate\", got \"" + text + "\"");
             }
         }
+        return new Target(format, rounding, outOfRange);
+    }
+
+    /** The precision cap of the table's precision loops. */
+    private int capBits(List<String> base, TomlTable t) throws InputError {
         int cap = DEFAULT_CAP_BITS;
         if (t.contains("precision_cap_bits")) {
             Object v = t.get(List.of("precision_cap_bits"));
@@ -153,23 +187,7 @@ final class SpecTables {
             }
             cap = (int) (long) l;
         }
-        if (quadrature) {
-            SpecQuadrature.Parsed rule = new SpecQuadrature(spec, root).table(base, t, fname, f, format);
-            tableKind = rule.kind();
-            columns = rule.columns();
-        } else if (grid != null && grid.hasIrrationalPoints()) {
-            for (Column c : columns) {
-                if (c.order() >= 2 || c.taylor()) {
-                    throw spec.error(child(base, "columns"), "column '" + c.name()
-                            + "' needs exact grid points; a Chebyshev grid has irrational nodes (available there: x, value, derivative)");
-                }
-            }
-        }
-        if (tableKind == null) {
-            tableKind = terms > 0 ? new TableKind.Taylor(grid, terms) : new TableKind.Values(grid);
-        }
-        List<String> outputs = outputs(base, t, javaEntries(tableKind, columns, format));
-        return new TableDef(name, fname, f, tableKind, columns, new Target(format, rounding, outOfRange), cap, outputs);
+        return cap;
     }
 
     private FunctionDef function(List<String> key, String fname) throws InputError {
@@ -193,149 +211,6 @@ final class SpecTables {
         Set<String> known = new TreeSet<>(spec.functionNames());
         throw spec.error(key, "unknown function '" + fname + "'" + Suggestions.hint(fname, known)
                 + (known.isEmpty() ? " (the spec defines no [functions])" : " (defined: " + String.join(", ", spec.functionNames()) + ")"));
-    }
-
-    private Grid grid(List<String> base, TomlTable t) throws InputError {
-        boolean hasGrid = t.contains("grid");
-        boolean hasPoints = t.contains("points");
-        if (hasGrid && hasPoints) {
-            throw spec.error(child(base, "points"), "give either 'grid' or 'points', not both");
-        }
-        if (!hasGrid && !hasPoints) {
-            throw spec.error(base, "a values table needs 'grid' or 'points'");
-        }
-        if (hasPoints) {
-            TomlArray arr = t.getArray(List.of("points"));
-            if (arr == null || arr.size() == 0) {
-                throw spec.error(child(base, "points"), "'points' must be a non-empty array of exact numbers as strings (\"0.1\", \"1/3\", \"2^-3\")");
-            }
-            List<Rational> pts = new ArrayList<>();
-            for (int i = 0; i < arr.size(); i++) {
-                pts.add(exact(arr, i));
-            }
-            return new Grid.Points(pts);
-        }
-        List<String> gk = child(base, "grid");
-        if (!t.isTable(List.of("grid"))) {
-            throw spec.error(gk, "'grid' must be an inline table { from = \"…\", to = \"…\", step = \"…\" }");
-        }
-        TomlTable g = t.getTable(List.of("grid"));
-        if (g.contains("chebyshev")) {
-            return chebyshev(gk, g);
-        }
-        for (String key : g.keySet()) {
-            if (!GRID_KEYS.contains(key)) {
-                throw spec.error(child(gk, key), "unknown key '" + key + "' in grid" + Suggestions.hint(key, GRID_KEYS) + " (a grid has: from, to, step)");
-            }
-        }
-        for (String key : GRID_KEYS) {
-            if (!g.contains(key)) {
-                throw spec.error(gk, "the grid needs '" + key + "'");
-            }
-        }
-        Rational from = exactValue(child(gk, "from"), g.get(List.of("from")));
-        Rational to = exactValue(child(gk, "to"), g.get(List.of("to")));
-        Rational step = exactValue(child(gk, "step"), g.get(List.of("step")));
-        if (step.signum() == 0 || (to.compareTo(from) != 0 && step.signum() != to.subtract(from).signum())) {
-            throw spec.error(child(gk, "step"), "the step " + step.toDecimalOrFraction() + " does not lead from "
-                    + from.toDecimalOrFraction() + " to " + to.toDecimalOrFraction());
-        }
-        Rational count = to.subtract(from).divide(step);
-        if (!count.isInteger()) {
-            throw spec.error(child(gk, "step"), "the step " + step.toDecimalOrFraction() + " does not divide the range from "
-                    + from.toDecimalOrFraction() + " to " + to.toDecimalOrFraction() + " (" + count.toDecimalOrFraction() + " steps)");
-        }
-        if (count.compareTo(Rational.of(MAX_POINTS - 1)) > 0) {
-            throw spec.error(child(gk, "step"), "the grid has " + count.add(Rational.ONE) + " points; at most " + MAX_POINTS + " are allowed");
-        }
-        return new Grid.Uniform(from, to, step);
-    }
-
-    private TableKind.Zeros zeroSearch(List<String> base, TomlTable t) throws InputError {
-        if (t.contains("grid") || t.contains("points")) {
-            throw spec.error(child(base, t.contains("grid") ? "grid" : "points"), "a zeros table searches an interval: give 'search' instead of a grid");
-        }
-        if (!t.isTable(List.of("search"))) {
-            throw spec.error(t.contains("search") ? child(base, "search") : base,
-                    "a zeros table needs search = { from = \"…\", to = \"…\" } (zeros met walking from 'from' to 'to')");
-        }
-        List<String> sk = child(base, "search");
-        TomlTable g = t.getTable(List.of("search"));
-        for (String key : g.keySet()) {
-            if (!key.equals("from") && !key.equals("to")) {
-                throw spec.error(child(sk, key), "unknown key '" + key + "' in search (it has: from, to)");
-            }
-        }
-        if (!g.contains("from") || !g.contains("to")) {
-            throw spec.error(sk, "search needs 'from' and 'to'");
-        }
-        Rational from = exactValue(child(sk, "from"), g.get(List.of("from")));
-        Rational to = exactValue(child(sk, "to"), g.get(List.of("to")));
-        if (from.equals(to)) {
-            throw spec.error(child(sk, "to"), "the search interval is empty (from = to)");
-        }
-        int count = 0;
-        if (t.contains("count")) {
-            Object v = t.get(List.of("count"));
-            if (!(v instanceof Long l) || l < 1 || l > 100_000) {
-                throw spec.error(child(base, "count"), "'count' must be an integer from 1 to 100000");
-            }
-            count = (int) (long) l;
-        }
-        boolean ofDerivative = false;
-        if (t.contains("of")) {
-            String of = string(base, t, "of");
-            if (!of.equals("value") && !of.equals("derivative")) {
-                throw spec.error(child(base, "of"), "'of' must be \"value\" (zeros of y) or \"derivative\" (zeros of y')");
-            }
-            ofDerivative = of.equals("derivative");
-        }
-        return new TableKind.Zeros(from, to, count, ofDerivative);
-    }
-
-    static final Set<String> CHEBYSHEV_KEYS = new LinkedHashSet<>(List.of("chebyshev", "n", "from", "to"));
-    static final int MAX_NODES = 100_000;
-
-    private Grid chebyshev(List<String> gk, TomlTable g) throws InputError {
-        for (String key : g.keySet()) {
-            if (!CHEBYSHEV_KEYS.contains(key)) {
-                throw spec.error(child(gk, key), "unknown key '" + key + "' in a Chebyshev grid" + Suggestions.hint(key, CHEBYSHEV_KEYS)
-                        + " (it has: chebyshev, n, from, to)");
-            }
-        }
-        for (String key : CHEBYSHEV_KEYS) {
-            if (!g.contains(key)) {
-                throw spec.error(gk, "the Chebyshev grid needs '" + key + "'");
-            }
-        }
-        Object kindValue = g.get(List.of("chebyshev"));
-        int kind = "first".equals(kindValue) ? 1 : "second".equals(kindValue) ? 2 : 0;
-        if (kind == 0) {
-            throw spec.error(child(gk, "chebyshev"), "chebyshev must be \"first\" (zeros of T_n) or \"second\" (extrema, ends included)");
-        }
-        Object nValue = g.get(List.of("n"));
-        int min = kind == 1 ? 1 : 2;
-        if (!(nValue instanceof Long l) || l < min || l > MAX_NODES) {
-            throw spec.error(child(gk, "n"), "n must be an integer from " + min + " to " + MAX_NODES);
-        }
-        Rational from = exactValue(child(gk, "from"), g.get(List.of("from")));
-        Rational to = exactValue(child(gk, "to"), g.get(List.of("to")));
-        if (from.compareTo(to) >= 0) {
-            throw spec.error(child(gk, "to"), "the interval must have from < to");
-        }
-        return new Grid.Chebyshev(kind, (int) (long) (Long) nValue, from, to);
-    }
-
-    /** Entry i of an array of points ({@link ExactPoints}), errors located inside the entry's string. */
-    private Rational exact(TomlArray arr, int i) throws InputError {
-        TomlPosition p = arr.inputPositionOf(i);
-        return ExactPoints.parse(arr.get(i), "point",
-                (column, message) -> new InputError(spec.display() + ":" + p.line() + ":" + (p.column() + column), message));
-    }
-
-    /** The value of a key holding one exact point ({@link ExactPoints}). */
-    private Rational exactValue(List<String> key, Object v) throws InputError {
-        return ExactPoints.parse(v, "number", (column, message) -> column == 0 ? spec.error(key, message) : spec.errorInString(key, column, message));
     }
 
     private List<Column> columns(List<String> base, TomlTable t, int terms) throws InputError {
@@ -448,6 +323,11 @@ final class SpecTables {
     }
 
     private String string(List<String> base, TomlTable t, String key) throws InputError {
+        return string(spec, base, t, key);
+    }
+
+    /** The string value of {@code key} in {@code t}, or an error at the key. */
+    static String string(SpecFile spec, List<String> base, TomlTable t, String key) throws InputError {
         Object v = t.get(List.of(key));
         if (!(v instanceof String s)) {
             throw spec.error(child(base, key), "'" + key + "' must be a string");
@@ -455,7 +335,7 @@ final class SpecTables {
         return s;
     }
 
-    private static List<String> child(List<String> base, String key) {
+    static List<String> child(List<String> base, String key) {
         List<String> r = new ArrayList<>(base);
         r.add(key);
         return r;
