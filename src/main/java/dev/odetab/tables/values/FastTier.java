@@ -84,8 +84,6 @@ final class FastTier {
         }
         List<Column> cols = t.columns();
         double maxRel = 0;
-        DDBall first = DDBall.of(x0);
-        DDBall step = DDBall.of(grid.step());
         for (int i = s; i < e; i++) {
             DDBall[] jet = jets[i - s];
             if (jet == null) {
@@ -99,10 +97,7 @@ final class FastTier {
                 Column col = cols.get(c);
                 Entry en;
                 if (col.isPoint()) {
-                    en = decide(first.add(step.multiply(i - s)), t);
-                    if (en == null) {
-                        en = Rounding.round(grid.exactPoint(i), t.target());
-                    }
+                    en = Rounding.round(grid.exactPoint(i), t.target());
                 } else {
                     DDBall b = jet[col.order()];
                     en = decide(b, t);

@@ -242,6 +242,12 @@ public final class ValuesEvaluator {
             Ball[] derivs = null;
             for (int c = 0; c < cols.size() && decided; c++) {
                 Column col = cols.get(c);
+                Rational exact = col.isPoint() ? grid.exactPoint(i) : null;
+                if (exact != null) {
+                    // an exact point is rounded once, as on the exact path and in the fast tier
+                    row[c] = Rounding.round(exact, t.target());
+                    continue;
+                }
                 Ball b;
                 if (col.isPoint()) {
                     b = node;
