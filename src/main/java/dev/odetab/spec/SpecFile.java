@@ -24,6 +24,7 @@ import java.util.HashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import java.util.TreeSet;
 import java.util.regex.Pattern;
@@ -160,6 +161,15 @@ public final class SpecFile {
     public Set<String> functionNames() {
         TomlTable t = toml.getTable("functions");
         return t == null ? Set.of() : new LinkedHashSet<>(t.keySet());
+    }
+
+    /**
+     * The catalog family that defines the function {@code name} ({@code family = "…"}), empty for
+     * an equation of its own or a name that is not a function of this spec.
+     */
+    Optional<Family> family(String name) {
+        Object familyName = toml.get(List.of("functions", name, "family"));
+        return familyName instanceof String s ? Catalog.lookup(s) : Optional.empty();
     }
 
     /** The function {@code name}, validated. */

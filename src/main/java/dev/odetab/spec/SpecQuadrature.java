@@ -5,6 +5,7 @@ import dev.odetab.base.InputError;
 import dev.odetab.numeric.Format;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.FunctionDef;
+import dev.odetab.ode.family.Family;
 import dev.odetab.tables.Column;
 import dev.odetab.tables.quadrature.GaussFamily;
 import dev.odetab.tables.TableKind;
@@ -28,11 +29,9 @@ final class SpecQuadrature {
     }
 
     private final SpecFile spec;
-    private final TomlTable root;
 
-    SpecQuadrature(SpecFile spec, TomlTable root) {
+    SpecQuadrature(SpecFile spec) {
         this.spec = spec;
-        this.root = root;
     }
 
     Parsed table(List<String> base, TomlTable t, String fname, FunctionDef f, Format format) throws InputError {
@@ -69,13 +68,10 @@ final class SpecQuadrature {
 
     /** The rule of the function: a family with a Gauss rule, an integer degree n from 1 to the cap. */
     private GaussFamily family(List<String> key, String fname, FunctionDef f) throws InputError {
-        Object familyName = spec.functionNames().contains(fname) ? root.get(List.of("functions", fname, "family")) : null;
-        if (!(familyName instanceof String name)) {
-            throw spec.error(key, "a quadrature table needs a function defined with the family of its Gauss rule ("
-                    + GaussFamily.Kind.names() + ") and its degree n; '" + fname + "' is "
-                    + (spec.functionNames().contains(fname) ? "an equation of its own" : "a built-in family without a Gauss rule"));
-        }
-        GaussFamily.Kind kind = GaussFamily.Kind.of(name).orElseThrow(() -> spec.error(key, "the family " + name
+        Family family = spec.family(fname).orElseThrow(() -> spec.error(key, "a quadrature table needs a function defined with the family of its Gauss rule ("
+                + GaussFamily.Kind.names() + ") and its degree n; '" + fname + "' is "
+                + (spec.functionNames().contains(fname) ? "an equation of its own" : "a built-in family without a Gauss rule")));
+        GaussFamily.Kind kind = GaussFamily.Kind.of(family).orElseThrow(() -> spec.error(key, "the family " + family.name()
                 + " of function '" + fname + "' has no Gauss rule (quadrature tables take " + GaussFamily.Kind.names() + ")"));
         Rational n = f.parameters().get("n");
         if (!n.isInteger() || n.signum() <= 0 || n.compareTo(Rational.of(GaussFamily.MAX_NODES)) > 0) {

@@ -92,7 +92,7 @@ final class SpecTables {
         Target target = target(base, t);
         int cap = capBits(base, t);
         if (quadrature) {
-            SpecQuadrature.Parsed rule = new SpecQuadrature(spec, root).table(base, t, fname, f, target.format());
+            SpecQuadrature.Parsed rule = new SpecQuadrature(spec).table(base, t, fname, f, target.format());
             tableKind = rule.kind();
             columns = rule.columns();
         } else if (grid != null && grid.hasIrrationalPoints()) {

@@ -3,6 +3,7 @@ package dev.odetab.tables.quadrature;
 import dev.odetab.numeric.Ball;
 import dev.odetab.numeric.BallFunctions;
 import dev.odetab.numeric.Rational;
+import dev.odetab.ode.family.Family;
 import java.math.BigDecimal;
 import java.math.BigInteger;
 import java.util.Arrays;
@@ -68,9 +69,9 @@ public record GaussFamily(Kind kind, int n, Rational a, Rational b) {
             return family;
         }
 
-        /** The kind whose catalog name is {@code family}, if it has a Gauss rule. */
-        public static Optional<Kind> of(String family) {
-            return Arrays.stream(values()).filter(k -> k.family.equals(family)).findFirst();
+        /** The rule of a catalog family, if it has one. */
+        public static Optional<Kind> of(Family family) {
+            return Arrays.stream(values()).filter(k -> k.family.equals(family.name())).findFirst();
         }
 
         /** The catalog names of the families with a Gauss rule. */
