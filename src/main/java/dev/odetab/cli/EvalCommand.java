@@ -14,6 +14,7 @@ import dev.odetab.series.FunctionEvaluator;
 import dev.odetab.series.PrecisionCapException;
 import dev.odetab.ode.SingularCrossingException;
 import dev.odetab.base.InputError;
+import dev.odetab.spec.SpecFile;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
@@ -30,7 +31,7 @@ import picocli.CommandLine.Parameters;
             "X is an exact decimal (-7.25, 1e-3), a C99 hex float (0x1p-2, the x_hex column of a CSV) or a rational (1/3);",
             "it never goes through a binary double."})
 final class EvalCommand implements Callable<Integer> {
-    static final int DEFAULT_CAP_BITS = 8192;
+    static final int DEFAULT_CAP_BITS = SpecFile.DEFAULT_PRECISION_CAP_BITS;
     static final int MAX_CAP_BITS = 1 << 20;
 
     @CommandLine.Spec

@@ -41,6 +41,13 @@ import org.tomlj.TomlTable;
  * character inside the string (exact for strings without escape sequences).
  */
 public final class SpecFile {
+    /**
+     * The precision cap, in bits, of a table without {@code precision_cap_bits} and of {@code eval}
+     * without {@code --precision-cap-bits}: one documented number (README), so that eval and a
+     * table decide the same entries.
+     */
+    public static final int DEFAULT_PRECISION_CAP_BITS = 4096;
+
     static final Set<String> TOP_LEVEL_KEYS = Set.of("title", "java_package", "functions", "tables");
     static final Set<String> EQUATION_KEYS = Set.of("equation", "at", "value", "slope");
     private static final Pattern COLUMN_IN_TEXT = Pattern.compile("at column (\\d+)");

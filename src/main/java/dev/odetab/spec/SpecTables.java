@@ -37,7 +37,7 @@ final class SpecTables {
      * about 8 per array, so 8000 entries stay below the limit with room for 130 arrays.
      */
     static final int MAX_JAVA_ENTRIES = 8000;
-    static final int DEFAULT_CAP_BITS = 4096;
+    static final int DEFAULT_CAP_BITS = SpecFile.DEFAULT_PRECISION_CAP_BITS;
     static final int MAX_CAP_BITS = 1 << 20;
 
     private final SpecFile spec;

@@ -82,7 +82,7 @@ class BadInputTest {
     @Test
     void precisionRequestAboveTheCap() {
         expect("argument 4 '3000', column 1: --digits 3000 needs at least 9999 bits of working precision, "
-                + "above the precision cap of 8192 bits (raise it with --precision-cap-bits)",
+                + "above the precision cap of 4096 bits (raise it with --precision-cap-bits)",
                 "eval", "airy-ai", "--digits", "3000", "1");
     }
 

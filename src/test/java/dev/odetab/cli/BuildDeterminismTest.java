@@ -101,7 +101,9 @@ class BuildDeterminismTest {
         CliRunner.Result undecided = CliRunner.run("build", DIR + "atomic-undecided.toml", "--out", out.toString());
         assertEquals(3, undecided.code(), undecided.err());
         assertEquals("odetab: " + DIR + "atomic-undecided.toml:21:1: table second: the precision cap of 128 bits cannot decide the rounding of 1 row(s), at x = 0 "
-                + "(raise precision_cap_bits, or the value may be an exact rounding boundary)\n", undecided.err());
+                + "(if such a value is an exact rounding boundary, for example an exact zero of a solution that is not a polynomial "
+                + "under a directed rounding, no cap decides it: change the rounding or leave the point out; otherwise raise "
+                + "precision_cap_bits)\n", undecided.err());
         assertSameFiles(before, snapshot(out), "after a build failing at the precision cap");
 
         // outputs are streamed to temporary files as they are rendered: the first table's are

@@ -355,11 +355,13 @@ public final class ValuesEvaluator {
         StringBuilder sb = new StringBuilder("table " + t.name() + ": the precision cap of " + t.capBits()
                 + " bits cannot decide the rounding of " + pending.size() + " row(s), at x =");
         for (int k = 0; k < Math.min(10, pending.size()); k++) {
-            sb.append(' ').append(t.grid().center(pending.get(k)).toDecimalOrFraction());
+            sb.append(k == 0 ? " " : ", ").append(t.grid().center(pending.get(k)).toDecimalOrFraction());
         }
         if (pending.size() > 10) {
             sb.append(" …");
         }
-        return sb.append(" (raise precision_cap_bits, or the value may be an exact rounding boundary)").toString();
+        return sb.append(" (if such a value is an exact rounding boundary, for example an exact zero of a solution that is"
+                + " not a polynomial under a directed rounding, no cap decides it: change the rounding or leave the point out;"
+                + " otherwise raise precision_cap_bits)").toString();
     }
 }
