@@ -51,7 +51,9 @@ final class EvalCommand implements Callable<Integer> {
     int digits;
 
     @Option(names = "--format", paramLabel = "FMT",
-            description = "print the entry as a table in this format holds it: binary16|binary32|binary64|binary128|double-double|decimal:N|fixed:sT.F|fixed:uT.F")
+            description = {"print the entry as a table in this format holds it: binary16|binary32|binary64|binary128|double-double|",
+                "decimal:N|fixed:sT.F|fixed:uT.F. Fixed point: T bits in all (the sign included), F of them fraction bits;",
+                "fixed:s16.15 is 16 bits with 15 fraction bits (Q-format Q0.15, \"Q15\"), fixed:u32.24 is UQ8.24."})
     String format;
 
     @Option(names = "--rounding", paramLabel = "MODE", defaultValue = "nearest-even",

@@ -34,7 +34,8 @@ public sealed interface Format {
     /** All spellings {@link #parse} accepts, for messages. */
     String SPELLINGS = "binary16, binary32, binary64, binary128, double-double, "
             + "decimal:N (1 <= N <= " + 10_000 + "), fixed:sT.F or fixed:uT.F "
-            + "(T total bits, 2..64 signed or 1..64 unsigned; F fraction bits, 0..128)";
+            + "(T bits in all, the sign included, 2..64 signed or 1..64 unsigned; F of them fraction bits, 0..128: "
+            + "fixed:s16.15 is 16 bits with 15 fraction bits, the Q-format Q0.15 or Q15; fixed:u32.24 is UQ8.24)";
 
     /** The canonical spelling, exactly as {@link #parse} accepts it. */
     String name();

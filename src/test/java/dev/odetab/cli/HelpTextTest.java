@@ -35,4 +35,11 @@ class HelpTextTest {
                 + "    equation   x*y'' + (alpha + 1 - x)*y' + n*y = 0\n"), r.out());
         assertTrue(r.out().contains("    alpha (optional, default 0): "), r.out());
     }
+
+    @Test
+    void evalExplainsFixedPointAndRoundingDirections() {
+        String h = help("eval");
+        assertTrue(h.contains("fixed:s16.15 is 16 bits with 15 fraction bits (Q-format Q0.15, \"Q15\"), fixed:u32.24 is UQ8.24."), h);
+        assertTrue(h.contains("toward-negative (never above the exact value; alias down); toward-positive (never below it; alias up)"), h);
+    }
 }

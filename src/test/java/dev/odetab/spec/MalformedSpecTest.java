@@ -52,7 +52,8 @@ class MalformedSpecTest {
             Map.entry("duplicate-column.toml", "4:26: column 'x' appears twice"),
             Map.entry("unknown-format.toml", "4:1: unknown format 'binary80': expected a format name; formats: binary16, binary32, "
                     + "binary64, binary128, double-double, decimal:N (1 <= N <= 10000), fixed:sT.F or fixed:uT.F "
-                    + "(T total bits, 2..64 signed or 1..64 unsigned; F fraction bits, 0..128)"),
+                    + "(T bits in all, the sign included, 2..64 signed or 1..64 unsigned; F of them fraction bits, 0..128: "
+                    + "fixed:s16.15 is 16 bits with 15 fraction bits, the Q-format Q0.15 or Q15; fixed:u32.24 is UQ8.24)"),
             Map.entry("unknown-rounding.toml", "4:1: unknown rounding mode 'nearest'; expected one of nearest-even, toward-negative, toward-positive, toward-zero (down and up are accepted for toward-negative and toward-positive)"),
             Map.entry("out-of-range-on-binary.toml",
                     "5:1: out_of_range applies to fixed-point formats only, and this table's format is binary32"),
