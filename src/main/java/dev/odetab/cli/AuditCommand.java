@@ -87,7 +87,7 @@ final class AuditCommand implements Callable<Integer> {
             files.put("summary.json", AuditReport.json(a));
             files.put("error.png", ErrorPlot.png(a));
             files.put("error.svg", ErrorPlot.svg(a));
-            OutputWriter.write(dir, files);
+            OutputWriter.write(dir, files).forEach(m -> err.println("odetab: " + m));
             out.print(AuditReport.summary(a));
             out.println("  report: " + dir + " (audit.csv, summary.json, error.png, error.svg)");
             return AuditReport.beyondTolerance(a) == 0 ? Main.OK : Main.DIFFERENCE;

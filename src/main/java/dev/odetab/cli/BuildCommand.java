@@ -1,5 +1,6 @@
 package dev.odetab.cli;
 
+import dev.odetab.emit.OutputFolder;
 import dev.odetab.emit.Outputs;
 import dev.odetab.emit.Provenance;
 import dev.odetab.base.ExprException;
@@ -80,32 +81,13 @@ final class BuildCommand implements Callable<Integer> {
                     work.add(new Job(s, t, s.javaPackage(t.name())));
                 }
             }
-            Path dir = out != null ? out : defaultOut(specs.get(0));
-            evaluate(work, n, err, results);
-            try (ProgressDisplay writing = ProgressDisplay.forBuild("odetab: writing", "entries", quiet);
-                    Outputs outputs = check ? Outputs.forChecking(dir, ToolVersion.get(), writing)
-                            : Outputs.forWriting(dir, ToolVersion.get(), writing)) {
-                for (int i = 0; i < work.size(); i++) {
-                    Job j = work.get(i);
-                    outputs.add(results.get(i), Provenance.of(Provenance.specPath(j.spec().path(), dir), j.spec().display(), j.spec().bytes(), results.get(i), ToolVersion.get()),
-                            j.spec().title(), j.javaPackage());
+            Path dir = out == null ? defaultOut(specs.get(0)) : out.toString().isEmpty() ? Path.of(".") : out;
+            // opened (locked) before the evaluation, so that a second build into the folder fails at once
+            try (OutputFolder folder = check ? null : OutputFolder.open(dir)) {
+                if (folder != null) {
+                    folder.notices().forEach(m -> err.println("odetab: " + m));
                 }
-                if (check) {
-                    List<String> diff = outputs.differences();
-                    writing.close();
-                    for (String d : diff) {
-                        outw.println("odetab: would change " + dir.resolve(d.substring(0, d.indexOf(' '))) + d.substring(d.indexOf(' ')));
-                    }
-                    if (!diff.isEmpty()) {
-                        return Main.DIFFERENCE;
-                    }
-                    outw.println("odetab: " + outputs.count() + " files in " + dir + " are up to date");
-                    return Main.OK;
-                }
-                outputs.commit();
-                writing.close();
-                outw.println("odetab: wrote " + outputs.count() + " files for " + work.size() + " table(s) to " + dir);
-                return Main.OK;
+                return evaluateAndWrite(work, n, dir, folder, outw, err, results);
             }
         } catch (InputError e) {
             err.println("odetab: " + e.getMessage());
@@ -133,6 +115,38 @@ final class BuildCommand implements Callable<Integer> {
         } finally {
             results.forEach(TableResult::close);
             outw.flush();
+        }
+    }
+
+    /** Evaluates the tables and writes (or, with --check, compares) their outputs; returns the exit code. */
+    private int evaluateAndWrite(List<Job> work, int n, Path dir, OutputFolder folder, PrintWriter outw, PrintWriter err,
+            List<TableResult> results) throws ExprException, PrecisionCapException, OutOfRangeException, Outputs.TemplateError,
+            Outputs.ClashError, IOException {
+        evaluate(work, n, err, results);
+        try (ProgressDisplay writing = ProgressDisplay.forBuild("odetab: writing", "entries", quiet);
+                Outputs outputs = folder == null ? Outputs.forChecking(dir, ToolVersion.get(), writing)
+                        : Outputs.forWriting(folder, ToolVersion.get(), writing)) {
+            for (int i = 0; i < work.size(); i++) {
+                Job j = work.get(i);
+                outputs.add(results.get(i), Provenance.of(Provenance.specPath(j.spec().path(), dir), j.spec().display(), j.spec().bytes(), results.get(i), ToolVersion.get()),
+                        j.spec().title(), j.javaPackage());
+            }
+            if (folder == null) {
+                List<String> diff = outputs.differences();
+                writing.close();
+                for (String d : diff) {
+                    outw.println("odetab: would change " + dir.resolve(d.substring(0, d.indexOf(' '))) + d.substring(d.indexOf(' ')));
+                }
+                if (!diff.isEmpty()) {
+                    return Main.DIFFERENCE;
+                }
+                outw.println("odetab: " + outputs.count() + " files in " + dir + " are up to date");
+                return Main.OK;
+            }
+            outputs.commit();
+            writing.close();
+            outw.println("odetab: wrote " + outputs.count() + " files for " + work.size() + " table(s) to " + dir);
+            return Main.OK;
         }
     }
 

@@ -2,12 +2,8 @@ package dev.odetab.emit;
 
 import java.io.IOException;
 import java.io.InputStream;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.security.SecureRandom;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.LinkedHashMap;
@@ -15,12 +11,11 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * Writes a build's files: every file first goes to a temporary file in the output folder, and
- * only when all are written are they renamed over their targets (atomic rename where the file
- * system has it). A build that fails before that leaves every existing file as it was.
+ * Writes a set of files into an output folder all or nothing ({@link OutputFolder}: temporary
+ * files, checks, journal, renames), and compares staged files with those on disk for
+ * {@code --check}.
  */
 public final class OutputWriter {
-    private static final SecureRandom RANDOM = new SecureRandom();
     private static final int CHUNK = 1 << 16;
 
     private OutputWriter() {
@@ -63,56 +58,26 @@ public final class OutputWriter {
     }
 
     /**
-     * A new empty file {@code .odetab-N.tmp} in {@code dir}. Unlike {@link Files#createTempFile},
-     * which makes it readable by its owner only, it gets the permissions of any new file (the
-     * umask applies), which the output keeps after the rename.
+     * Writes every file into {@code dir} (created when missing) through {@link OutputFolder}:
+     * all or nothing, under the folder's lock. Returns what opening the folder did to recover
+     * from an interrupted run ({@link OutputFolder#notices}).
      */
-    static Path createTemporary(Path dir) throws IOException {
-        while (true) {
-            Path tmp = dir.resolve(".odetab-" + Long.toUnsignedString(RANDOM.nextLong()) + ".tmp");
+    public static List<String> write(Path dir, Map<String, byte[]> files) throws IOException {
+        try (OutputFolder folder = OutputFolder.open(dir)) {
+            Map<String, Path> staged = new LinkedHashMap<>();
             try {
-                return Files.createFile(tmp);
-            } catch (FileAlreadyExistsException e) {
-                // another name
+                for (Map.Entry<String, byte[]> e : files.entrySet()) {
+                    Path tmp = folder.createTemporary();
+                    staged.put(e.getKey(), tmp);
+                    Files.write(tmp, e.getValue());
+                }
+                folder.commit(staged);
+            } finally {
+                for (Path tmp : staged.values()) {
+                    Files.deleteIfExists(tmp);
+                }
             }
-        }
-    }
-
-    /** Writes every file into {@code dir} (created when missing). */
-    public static void write(Path dir, Map<String, byte[]> files) throws IOException {
-        Files.createDirectories(dir);
-        Map<String, Path> staged = new LinkedHashMap<>();
-        try {
-            for (Map.Entry<String, byte[]> e : files.entrySet()) {
-                Path tmp = createTemporary(dir);
-                staged.put(e.getKey(), tmp);
-                Files.write(tmp, e.getValue());
-            }
-            commit(dir, staged);
-        } finally {
-            for (Path tmp : staged.values()) {
-                Files.deleteIfExists(tmp);
-            }
-        }
-    }
-
-    /**
-     * Renames each staged file (a temporary file in {@code dir}) over its target. Every name is
-     * checked first, so a name outside the folder moves nothing.
-     */
-    static void commit(Path dir, Map<String, Path> staged) throws IOException {
-        for (String name : staged.keySet()) {
-            if (!dir.resolve(name).normalize().startsWith(dir.normalize())) {
-                throw new IOException("refusing to write outside the output folder: " + name);
-            }
-        }
-        for (Map.Entry<String, Path> e : staged.entrySet()) {
-            Path target = dir.resolve(e.getKey()).normalize();
-            try {
-                Files.move(e.getValue(), target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException x) {
-                Files.move(e.getValue(), target, StandardCopyOption.REPLACE_EXISTING);
-            }
+            return folder.notices();
         }
     }
 }

@@ -21,52 +21,48 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.TreeMap;
-import java.util.stream.Stream;
 
 /**
  * The outputs of one build, each rendered straight into a temporary file as it is produced
  * (its SHA-256 computed on the way, for {@code manifest.json}), so that memory does not grow
- * with the length of a table. {@link #commit} renames them all over their targets
- * ({@link OutputWriter}); {@link #differences} compares them with the files on disk for
- * {@code --check}; {@link #close} deletes whatever was not committed, so a build that fails
- * at any point leaves every existing file as it was, and creates no output folder. A shutdown
- * hook does the same when the process is stopped (Ctrl-C, SIGTERM) while outputs are written.
+ * with the length of a table. {@link #commit} replaces the files on disk by them all or nothing
+ * ({@link OutputFolder}: checks first, then a journal, so that a kill inside the commit is
+ * completed by the next run); {@link #differences} compares them with the files on
+ * disk for {@code --check}; {@link #close} deletes whatever was not committed, so a build that
+ * fails at any point leaves every existing file as it was. A shutdown hook does the same when
+ * the process is stopped (Ctrl-C, SIGTERM) while outputs are written.
  */
 public final class Outputs implements AutoCloseable {
     public static final String MANIFEST = "manifest.json";
 
     private final Path dir;
     private final Path staging;
-    private final List<Path> created;
+    /** The locked output folder (opened and closed by the caller), or null when checking. */
+    private final OutputFolder folder;
     private final String toolVersion;
     private final Progress progress;
     private final Thread cleanup = new Thread(this::deleteUncommitted, "odetab: delete temporary outputs");
     private final TreeMap<String, Path> files = new TreeMap<>();
     private final List<Map<String, Object>> manifestEntries = new ArrayList<>();
     private boolean manifestStaged;
+    private boolean closed;
 
-    private Outputs(Path dir, Path staging, List<Path> created, String toolVersion, Progress progress) {
+    private Outputs(Path dir, Path staging, OutputFolder folder, String toolVersion, Progress progress) {
         this.dir = dir;
         this.staging = staging;
-        this.created = created;
+        this.folder = folder;
         this.toolVersion = toolVersion;
         this.progress = progress;
         Runtime.getRuntime().addShutdownHook(cleanup);
     }
 
     /**
-     * Outputs to be written into {@code dir}: temporary files go there (so that the final
-     * renames stay on one file system); the folder is created when missing, and removed again
-     * by {@link #close} unless the outputs were committed. The entries written are reported to
-     * {@code progress}.
+     * Outputs to be written into an opened output folder (locked by the caller, who closes it
+     * after this): temporary files go there, so that the final renames stay on one file
+     * system. The entries written are reported to {@code progress}.
      */
-    public static Outputs forWriting(Path dir, String toolVersion, Progress progress) throws IOException {
-        List<Path> created = new ArrayList<>();
-        for (Path p = dir.toAbsolutePath().normalize(); p != null && !Files.exists(p); p = p.getParent()) {
-            created.add(p);
-        }
-        Files.createDirectories(dir);
-        return new Outputs(dir, dir, created, toolVersion, progress);
+    public static Outputs forWriting(OutputFolder folder, String toolVersion, Progress progress) {
+        return new Outputs(folder.dir(), folder.dir(), folder, toolVersion, progress);
     }
 
     /**
@@ -76,8 +72,9 @@ public final class Outputs implements AutoCloseable {
      */
     public static Outputs forChecking(Path dir, String toolVersion, Progress progress) throws IOException {
         Path staging = Files.createTempDirectory("odetab-check-");
-        return new Outputs(dir, staging, new ArrayList<>(List.of(staging)), toolVersion, progress);
+        return new Outputs(dir, staging, null, toolVersion, progress);
     }
+
 
     /** A template problem (exit 2), located in the template. */
     public static final class TemplateError extends Exception {
@@ -190,7 +187,7 @@ public final class Outputs implements AutoCloseable {
     private String stageBytes(String file, Renderer renderer) throws IOException, TemplateEngine.TemplateProblem {
         Path tmp;
         synchronized (this) {
-            tmp = OutputWriter.createTemporary(staging);
+            tmp = OutputFolder.createTemporary(staging);
             files.put(file, tmp);
         }
         MessageDigest md = sha256();
@@ -229,15 +226,20 @@ public final class Outputs implements AutoCloseable {
         return OutputWriter.differences(dir, files);
     }
 
-    /** Renames every file, the manifest included, over its target in the output folder. */
+    /** Replaces the files in the output folder by every staged file, the manifest last ({@link OutputFolder#commit}). */
     public synchronized void commit() throws IOException {
+        if (folder == null) {
+            throw new IllegalStateException("outputs staged for --check are never committed");
+        }
         stageManifest();
-        OutputWriter.commit(dir, files);
+        Map<String, Path> ordered = new LinkedHashMap<>(files);
+        ordered.remove(MANIFEST);
+        ordered.put(MANIFEST, files.get(MANIFEST));
+        folder.commit(ordered);
         files.clear();
-        created.clear();
     }
 
-    /** Deletes every temporary file left, and the folders this build created unless it committed. */
+    /** Deletes every temporary file left; when checking, the staging folder too. */
     @Override
     public void close() throws IOException {
         try {
@@ -250,23 +252,18 @@ public final class Outputs implements AutoCloseable {
     }
 
     private synchronized void deleteUncommitted() {
+        if (closed) {
+            return;
+        }
+        closed = true;
         try {
             for (Path tmp : files.values()) {
                 Files.deleteIfExists(tmp);
             }
             files.clear();
-            for (Path p : created) {
-                if (!Files.isDirectory(p)) {
-                    continue;
-                }
-                try (Stream<Path> s = Files.list(p)) {
-                    if (s.findAny().isPresent()) {
-                        break;
-                    }
-                }
-                Files.delete(p);
+            if (folder == null) {
+                Files.deleteIfExists(staging);
             }
-            created.clear();
         } catch (IOException e) {
             throw new UncheckedIOException("cannot delete the temporary outputs: " + e.getMessage(), e);
         }
