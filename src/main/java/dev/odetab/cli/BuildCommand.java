@@ -17,7 +17,10 @@ import java.io.PrintWriter;
 import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
@@ -77,10 +80,15 @@ final class BuildCommand implements Callable<Integer> {
             List<Job> work = new ArrayList<>();
             for (Path p : specs) {
                 SpecFile s = SpecFile.load(p);
-                for (TableDef t : s.tables()) {
+                List<TableDef> tables = s.tables();
+                if (tables.isEmpty()) {
+                    throw new InputError(s.display() + ":1:1", "nothing to build: the spec defines no table ([tables.NAME])");
+                }
+                for (TableDef t : tables) {
                     work.add(new Job(s, t, s.javaPackage(t.name())));
                 }
             }
+            refuseClashes(work);
             Path dir = out == null ? defaultOut(specs.get(0)) : out.toString().isEmpty() ? Path.of(".") : out;
             // opened (locked) before the evaluation, so that a second build into the folder fails at once
             try (OutputFolder folder = check ? null : OutputFolder.open(dir)) {
@@ -147,6 +155,36 @@ final class BuildCommand implements Callable<Integer> {
             writing.close();
             outw.println("odetab: wrote " + outputs.count() + " files for " + work.size() + " table(s) to " + dir);
             return Main.OK;
+        }
+    }
+
+    /**
+     * Refuses, at the spec line of the later table, two output files of the build whose names
+     * are equal or differ only in case (on a case-insensitive file system, such as the defaults
+     * of macOS and Windows, one would silently replace the other), and an output named like the
+     * manifest.
+     */
+    private static void refuseClashes(List<Job> work) throws InputError {
+        Map<String, String[]> owners = new HashMap<>(); // folded file name -> {file, table, position}
+        for (Job j : work) {
+            String name = j.table().name();
+            String at = j.spec().tablePosition(name);
+            for (String file : Outputs.fileNames(j.table())) {
+                String folded = file.toLowerCase(Locale.ROOT);
+                if (folded.equals(Outputs.MANIFEST)) {
+                    throw new InputError(at, "table " + name + " would write " + file + ", the name of the build's own manifest; rename the table");
+                }
+                String[] owner = owners.putIfAbsent(folded, new String[] {file, name, at});
+                if (owner != null && owner[0].equals(file)) {
+                    throw new InputError(at, "table " + name + " would write " + file + ", which table " + owner[1] + " (at " + owner[2]
+                            + ") writes too: rename one of the tables");
+                }
+                if (owner != null) {
+                    throw new InputError(at, "table " + name + " would write " + file + ", which differs only in case from " + owner[0]
+                            + " of table " + owner[1] + " (at " + owner[2] + "): on a case-insensitive file system one would replace"
+                            + " the other; rename one of the tables");
+                }
+            }
         }
     }
 

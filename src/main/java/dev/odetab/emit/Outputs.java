@@ -3,6 +3,7 @@ package dev.odetab.emit;
 import dev.odetab.base.Json;
 
 import dev.odetab.base.Progress;
+import dev.odetab.tables.TableDef;
 import dev.odetab.tables.TableResult;
 import java.io.BufferedOutputStream;
 import java.io.IOException;
@@ -112,20 +113,16 @@ public final class Outputs implements AutoCloseable {
         String name = result.table().name();
         progress.start(name, entriesWritten(result));
         for (String output : result.table().outputs()) {
+            List<String> files = fileNames(name, output);
             try {
                 switch (output) {
-                    case "csv" -> stage(name + ".csv", provenance, out -> CsvOutput.render(result, out, progress));
+                    case "csv" -> stage(files.get(0), provenance, out -> CsvOutput.render(result, out, progress));
                     case "c" -> {
-                        String base = name.toLowerCase(Locale.ROOT);
-                        stage(base + ".h", provenance, out -> TemplateEngine.renderBuiltIn("c_header.ftl", model, out));
-                        stage(base + ".c", provenance, out -> TemplateEngine.renderBuiltIn("c_source.ftl", model, out));
+                        stage(files.get(0), provenance, out -> TemplateEngine.renderBuiltIn("c_header.ftl", model, out));
+                        stage(files.get(1), provenance, out -> TemplateEngine.renderBuiltIn("c_source.ftl", model, out));
                     }
-                    case "java" -> stage(EmitModel.className(name) + ".java", provenance,
-                            out -> TemplateEngine.renderBuiltIn("java.ftl", model, out));
-                    default -> {
-                        Path p = Path.of(output);
-                        stage(userOutputName(name, p), provenance, out -> TemplateEngine.renderFile(p, model, out));
-                    }
+                    case "java" -> stage(files.get(0), provenance, out -> TemplateEngine.renderBuiltIn("java.ftl", model, out));
+                    default -> stage(files.get(0), provenance, out -> TemplateEngine.renderFile(Path.of(output), model, out));
                 }
             } catch (TemplateEngine.TemplateProblem e) {
                 throw new TemplateError(e.where(), e.getMessage());
@@ -147,6 +144,25 @@ public final class Outputs implements AutoCloseable {
             entries += rows * (output.equals("csv") ? columns : arrays);
         }
         return entries;
+    }
+
+    /** The names of the files a table writes, in the order {@link #add} writes them. */
+    public static List<String> fileNames(TableDef table) {
+        List<String> names = new ArrayList<>();
+        for (String output : table.outputs()) {
+            names.addAll(fileNames(table.name(), output));
+        }
+        return names;
+    }
+
+    /** The files of one output of a table: {@code csv}, {@code c} (header, then source), {@code java}, or a template's path. */
+    private static List<String> fileNames(String table, String output) {
+        return switch (output) {
+            case "csv" -> List.of(table + ".csv");
+            case "c" -> List.of(table.toLowerCase(Locale.ROOT) + ".h", table.toLowerCase(Locale.ROOT) + ".c");
+            case "java" -> List.of(EmitModel.className(table) + ".java");
+            default -> List.of(userOutputName(table, Path.of(output)));
+        };
     }
 
     /**

@@ -40,6 +40,31 @@ class OutputTransactionTest {
     }
 
     @Test
+    void tableNamesDifferingOnlyInCaseAreRefusedAtTheSpecLine(@TempDir Path tmp) {
+        Path out = builtFolder(tmp);
+        refused(out, DIR + "case-collision.toml:10:1: table AI would write AI.csv, which differs only in case from Ai.csv of table Ai (at "
+                + DIR + "case-collision.toml:3:1): on a case-insensitive file system one would replace the other; rename one of the tables",
+                "build", DIR + "case-collision.toml", "--out", out.toString());
+    }
+
+    @Test
+    void twoTablesWritingOneCFileAreRefusedBeforeEvaluation(@TempDir Path tmp) {
+        Path out = builtFolder(tmp);
+        refused(out, DIR + "c-clash.toml:16:1: table BI would write bi.h, which table Bi (at " + DIR
+                + "c-clash.toml:9:1) writes too: rename one of the tables",
+                "build", DIR + "c-clash.toml", "--out", out.toString());
+    }
+
+    @Test
+    void aSpecWithoutTablesBuildsNothingAndKeepsTheManifest(@TempDir Path tmp) {
+        Path out = builtFolder(tmp);
+        for (String spec : new String[] {"empty.toml", "comment-only.toml", "functions-only.toml"}) {
+            refused(out, DIR + spec + ":1:1: nothing to build: the spec defines no table ([tables.NAME])",
+                    "build", DIR + spec, "--out", out.toString());
+        }
+    }
+
+    @Test
     void aFolderWhereAnOutputGoesStopsTheBuildBeforeAnyRename(@TempDir Path tmp) throws IOException {
         Path out = builtFolder(tmp);
         Files.delete(out.resolve("Ai.java"));
