@@ -13,7 +13,11 @@ import dev.odetab.base.InputError;
 import dev.odetab.spec.SpecFile;
 import dev.odetab.tables.Column;
 import dev.odetab.tables.TableDef;
+import dev.odetab.base.Json;
 import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -21,6 +25,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -34,6 +40,9 @@ import picocli.CommandLine.Parameters;
             "Exit codes: 0 every entry is within the tolerance; 1 some entry is beyond it;",
             "2 bad input (unreadable file, unknown table); 3 the precision cap cannot settle an entry."})
 final class AuditCommand implements Callable<Integer> {
+    /** The audited file's path in summary.json, as written there (JSON-escaped). */
+    private static final Pattern AUDITED_FILE = Pattern.compile("^\\{\\s*\"file\": \"((?:[^\"\\\\]|\\\\.)*)\"");
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -81,6 +90,9 @@ final class AuditCommand implements Callable<Integer> {
             var entries = TableReader.read(file, column == null ? col.name() : column, t);
             AuditResult a = Auditor.audit(t, col, entries, tolerance);
             Path dir = report != null ? report : defaultReport(file);
+            if (report == null) {
+                refuseOtherReport(dir);
+            }
             System.setProperty("java.awt.headless", "true");
             Map<String, byte[]> files = new LinkedHashMap<>();
             files.put("audit.csv", AuditReport.csv(a));
@@ -118,6 +130,32 @@ final class AuditCommand implements Callable<Integer> {
         int i = CommandContext.indexOf("--column", 1);
         throw new InputError(wanted == null ? InputError.argument(2, target, 1) : InputError.argument(i + 1, wanted, 1),
                 "table " + t.name() + " has no column " + (wanted == null ? "besides x" : "'" + wanted + "'"));
+    }
+
+    /**
+     * The default report folder is named after FILE without its extension, so {@code good.c} and
+     * {@code good.csv} share it: refuses to replace a report of another file there (its
+     * summary.json names the file audited), before any work.
+     */
+    private void refuseOtherReport(Path dir) throws InputError {
+        Path summary = dir.resolve("summary.json");
+        String text;
+        try {
+            text = Files.isRegularFile(summary) ? Files.readString(summary, StandardCharsets.UTF_8) : "";
+        } catch (IOException | UncheckedIOException e) {
+            return; // not a report of ours: the commit's checks decide
+        }
+        Matcher m = AUDITED_FILE.matcher(text);
+        if (!m.find()) {
+            return;
+        }
+        String audited = Json.write(file.getFileName().toString()).strip();
+        String previous = m.group(1).substring(m.group(1).lastIndexOf('/') + 1);
+        if (!audited.equals("\"" + previous + "\"")) {
+            int i = Math.max(3, CommandContext.indexOf(file.toString(), 3));
+            throw new InputError(InputError.argument(i, file.toString(), 1), "the default report folder " + dir
+                    + " holds the report of " + m.group(1) + "; name another folder with --report");
+        }
     }
 
     static Path defaultReport(Path file) {

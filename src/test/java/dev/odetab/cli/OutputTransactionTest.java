@@ -113,6 +113,21 @@ class OutputTransactionTest {
     }
 
     @Test
+    void anAuditDoesNotReplaceTheReportOfAnotherFile(@TempDir Path tmp) throws IOException {
+        Path out = builtFolder(tmp);
+        Files.copy(out.resolve("ai.csv"), out.resolve("good.csv"));
+        Files.copy(out.resolve("Ai.java"), out.resolve("good.java"));
+        CliRunner.Result first = CliRunner.run("audit", DIR + "small.toml#ai", out.resolve("good.csv").toString());
+        assertEquals(0, first.code(), first.err());
+        refused(out, "argument 3 '" + out.resolve("good.java") + "', column 1: the default report folder " + out.resolve("good.audit")
+                + " holds the report of " + out.resolve("good.csv") + "; name another folder with --report",
+                "audit", DIR + "small.toml#ai", out.resolve("good.java").toString());
+        CliRunner.Result other = CliRunner.run("audit", DIR + "small.toml#ai", out.resolve("good.java").toString(),
+                "--report", out.resolve("good-java.audit").toString());
+        assertEquals(0, other.code(), other.err());
+    }
+
+    @Test
     void aBlockedReportFolderLeavesTheOldReportWhole(@TempDir Path tmp) throws IOException {
         Path out = builtFolder(tmp);
         Path csv = out.resolve("ai.csv");
