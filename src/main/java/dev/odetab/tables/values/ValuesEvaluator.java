@@ -332,7 +332,7 @@ public final class ValuesEvaluator {
      * Rigorous: an upper bound of rad/|y| for every y in b, to three digits rounded up (the
      * radius itself when the ball reaches within a radius of 0).
      */
-    private static BigDecimal relative(Ball b) {
+    static BigDecimal relative(Ball b) {
         if (b.rad().signum() == 0) {
             return BigDecimal.ZERO;
         }
