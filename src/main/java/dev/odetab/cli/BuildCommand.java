@@ -103,9 +103,6 @@ final class BuildCommand implements Callable<Integer> {
         } catch (Outputs.TemplateError e) {
             err.println("odetab: " + e.where() + ": " + e.getMessage());
             return Main.BAD_INPUT;
-        } catch (Outputs.ClashError e) {
-            err.println("odetab: " + e.getMessage());
-            return Main.BAD_INPUT;
         } catch (OutOfRangeException | SingularCrossingException e) {
             err.println("odetab: " + failedAt() + e.getMessage());
             return Main.BAD_INPUT;
@@ -128,8 +125,7 @@ final class BuildCommand implements Callable<Integer> {
 
     /** Evaluates the tables and writes (or, with --check, compares) their outputs; returns the exit code. */
     private int evaluateAndWrite(List<Job> work, int n, Path dir, OutputFolder folder, PrintWriter outw, PrintWriter err,
-            List<TableResult> results) throws ExprException, PrecisionCapException, OutOfRangeException, Outputs.TemplateError,
-            Outputs.ClashError, IOException {
+            List<TableResult> results) throws ExprException, PrecisionCapException, OutOfRangeException, Outputs.TemplateError, IOException {
         evaluate(work, n, err, results);
         try (ProgressDisplay writing = ProgressDisplay.forBuild("odetab: writing", "entries", quiet);
                 Outputs outputs = folder == null ? Outputs.forChecking(dir, ToolVersion.get(), writing)

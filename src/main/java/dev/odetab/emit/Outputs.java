@@ -92,14 +92,6 @@ public final class Outputs implements AutoCloseable {
         }
     }
 
-    /** An output name that two tables would both write. */
-    public static final class ClashError extends Exception {
-        private static final long serialVersionUID = 1L;
-
-        ClashError(String message) {
-            super(message);
-        }
-    }
 
     /** Writes the bytes of one output. */
     private interface Renderer {
@@ -108,7 +100,7 @@ public final class Outputs implements AutoCloseable {
 
     /** Renders the outputs the table asks for; {@code javaPackage} is empty for the default package. */
     public void add(TableResult result, Provenance provenance, String specTitle, String javaPackage)
-            throws TemplateError, ClashError, IOException {
+            throws TemplateError, IOException {
         Map<String, Object> model = EmitModel.of(result, provenance, specTitle, javaPackage, progress);
         String name = result.table().name();
         progress.start(name, entriesWritten(result));
@@ -176,10 +168,10 @@ public final class Outputs implements AutoCloseable {
         return dot > 0 ? table + base.substring(dot) : table + "." + base + ".txt";
     }
 
-    private void stage(String file, Provenance p, Renderer renderer) throws ClashError, IOException, TemplateEngine.TemplateProblem {
+    /** Renders one output; its name is new to this build ({@code build} refuses clashing names at the spec line, by {@link #fileNames}). */
+    private void stage(String file, Provenance p, Renderer renderer) throws IOException, TemplateEngine.TemplateProblem {
         if (files.containsKey(file) || file.equals(MANIFEST)) {
-            throw new ClashError("two outputs of this build would both be written to " + file
-                    + " (table names must differ across the specs of one build)");
+            throw new IllegalStateException("two outputs of this build are named " + file + ", which the spec check refuses");
         }
         Map<String, Object> entry = new LinkedHashMap<>();
         entry.put("path", file);
