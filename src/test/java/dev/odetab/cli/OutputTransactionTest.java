@@ -112,6 +112,16 @@ class OutputTransactionTest {
         assertEquals(FolderState.of(clean), FolderState.of(out), "the outputs after the recovery and the build");
     }
 
+    /** A journal naming a target outside the folder (damaged, or written by someone else) moves nothing. */
+    @Test
+    void aJournalNamingAFileOutsideTheFolderMovesNothing(@TempDir Path tmp) throws IOException {
+        Path out = builtFolder(tmp);
+        Files.writeString(out.resolve(".odetab-1.tmp"), "int odetab_injected;");
+        Files.writeString(out.resolve(".odetab-journal"), "odetab journal 1\n.odetab-1.tmp\t../escape.c\n");
+        refused(tmp, "cannot write the outputs: " + out.resolve(".odetab-journal") + " is damaged (line '.odetab-1.tmp\t../escape.c');"
+                + " remove it after checking the folder", "build", DIR + "small.toml", "--out", out.toString());
+    }
+
     @Test
     void anAuditDoesNotReplaceTheReportOfAnotherFile(@TempDir Path tmp) throws IOException {
         Path out = builtFolder(tmp);
