@@ -3,8 +3,12 @@ package dev.odetab.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.IOException;
 import java.math.BigDecimal;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 /** {@code eval --format}: entries as a table holds them, and the numerical-limit and bad-format exits. */
 class EvalFormatTest {
@@ -72,5 +76,16 @@ class EvalFormatTest {
         CliRunner.Result b = CliRunner.run("eval", "airy-ai", xDecimal, "--format", "binary64");
         assertEquals(0, a.code(), a.err());
         assertEquals(b.out().split("\t")[1], a.out().split("\t")[1]);
+    }
+
+    @Test
+    void specPointsTakeHexFloatsToo(@TempDir Path tmp) throws IOException {
+        Path spec = tmp.resolve("hex.toml");
+        Files.writeString(spec, String.join("\n", "[tables.t]", "function = \"airy-ai\"",
+                "points = [\"0x1p-2\", \"-0x1.8p+1\"]", "columns = [\"x\", \"value\"]", "outputs = [\"csv\"]", ""));
+        CliRunner.Result r = CliRunner.run("build", spec.toString(), "--out", tmp.resolve("out").toString(), "--quiet");
+        assertEquals(0, r.code(), r.err());
+        String csv = Files.readString(tmp.resolve("out/t.csv"));
+        assertTrue(csv.contains("\n0.25,0x1p-2,") && csv.contains("\n-3,-0x1.8p+1,"), csv);
     }
 }
