@@ -12,10 +12,7 @@ import dev.odetab.ode.Equation;
 import dev.odetab.ode.FunctionDef;
 import dev.odetab.ode.SingularPoint;
 import dev.odetab.ode.SingularPoints;
-import dev.odetab.series.FunctionEvaluator;
-import dev.odetab.series.Jet;
-import dev.odetab.series.LocalSeries;
-import dev.odetab.series.Recurrence;
+import dev.odetab.series.Inspection;
 import dev.odetab.ode.SingularCrossingException;
 import dev.odetab.base.InputError;
 import java.io.PrintWriter;
@@ -85,13 +82,13 @@ final class InspectCommand implements Callable<Integer> {
             }
             out.println("normalization   y(" + f.at().toDecimalOrFraction() + ") = " + constant(f.value()));
             out.println("                y'(" + f.at().toDecimalOrFraction() + ") = " + constant(f.slope()));
-            Optional<Poly> poly = FunctionEvaluator.polynomial(f);
-            if (poly.isPresent()) {
-                int order = new Recurrence(eq, f.at()).order();
-                out.println("exact           polynomial of degree " + poly.get().degree() + ": the series terminates (" + order
+            Optional<Inspection.Terminating> exact = Inspection.terminating(f);
+            if (exact.isPresent()) {
+                Poly poly = exact.get().polynomial();
+                out.println("exact           polynomial of degree " + poly.degree() + ": the series terminates (" + exact.get().order()
                         + " consecutive zero coefficients), so values are exact rationals rounded once");
-                if (poly.get().degree() <= MAX_SHOWN_DEGREE) {
-                    out.println("                y = " + poly.get());
+                if (poly.degree() <= MAX_SHOWN_DEGREE) {
+                    out.println("                y = " + poly);
                 }
             }
             BigDecimal radius = SingularPoints.radiusLowerBound(eq, x);
@@ -99,15 +96,14 @@ final class InspectCommand implements Callable<Integer> {
                     ? "infinite at x = " + x.toDecimalOrFraction() + ": every solution is entire (no singular point)"
                     : ">= " + radius.stripTrailingZeros().toPlainString() + " at x = " + x.toDecimalOrFraction()
                             + " (distance to the nearest singular point, rounded down)"));
-            Recurrence rec = new Recurrence(eq, x);
             out.println("recurrence      with t = x - " + x.toDecimalOrFraction() + ", y = sum c(m)*t^m, for m >= 2:");
-            out.println("                " + rec.describe());
-            Jet jet = FunctionEvaluator.enclose(f, x, WORK_BITS).jet();
-            Ball[] c = LocalSeries.coefficients(rec, jet.value(), jet.derivative(), COEFFICIENTS, WORK_BITS);
+            out.println("                " + Inspection.recurrence(eq, x));
+            List<Inspection.Coefficient> c = Inspection.coefficients(f, x, COEFFICIENTS, SHOW_DIGITS, WORK_BITS);
             out.println("taylor          first " + COEFFICIENTS + " coefficients at x = " + x.toDecimalOrFraction()
                     + ", correctly rounded to " + SHOW_DIGITS + " digits (or the enclosure when it cannot decide them)");
-            for (int m = 0; m < c.length; m++) {
-                out.println("                c(" + m + ") = " + show(c[m]));
+            for (int m = 0; m < c.size(); m++) {
+                out.println("                c(" + m + ") = " + c.get(m).rounded().map(v -> DecimalDigits.format(v, SHOW_DIGITS))
+                        .orElse(c.get(m).enclosure().toString()));
             }
             return Main.OK;
         } catch (InputError | ExprException | SingularCrossingException e) {
