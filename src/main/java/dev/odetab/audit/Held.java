@@ -71,7 +71,7 @@ final class Held {
         Rational typed = switch (lit.type()) {
             case FLOAT -> held(v, Format.BinaryFormat.BINARY32);
             case DOUBLE -> held(v, Format.BinaryFormat.BINARY64);
-            default -> v;
+            case INTEGER, LONG_DOUBLE, TEXT -> v;
         };
         if (typed == null) {
             return new Entries.Item(text, line, column, null, negative);

@@ -1,6 +1,7 @@
 package dev.odetab.audit;
 
 import dev.odetab.base.InputError;
+import dev.odetab.numeric.Format;
 import dev.odetab.tables.Grid;
 import dev.odetab.tables.TableDef;
 import java.io.IOException;
@@ -35,8 +36,12 @@ public final class TableReader {
         if (display.toLowerCase(Locale.ROOT).endsWith(".csv")) {
             return CsvReader.read(display, text, column, t.format(), t.kind().givenPoints().map(Grid::points).orElse(List.of()));
         }
-        if (t.format() instanceof dev.odetab.numeric.Format.DoubleDouble
-                || t.format().equals(dev.odetab.numeric.Format.BinaryFormat.BINARY128)) {
+        boolean arrays = switch (t.format().kind()) {
+            case DOUBLE_DOUBLE -> false;
+            case BINARY -> !t.format().equals(Format.BinaryFormat.BINARY128);
+            case DECIMAL, FIXED -> true;
+        };
+        if (!arrays) {
             throw new InputError(display, "double-double and binary128 tables are audited from CSV files only");
         }
         return ArrayReader.read(display, text, column, t.format());
