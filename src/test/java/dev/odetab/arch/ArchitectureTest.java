@@ -28,7 +28,8 @@ import org.tomlj.TomlTable;
  * describes it in prose) against the main sources: every package is declared and documented,
  * every reference between packages is declared in the referring package's {@code uses}, no
  * forbidden edge appears, the packages form no cycle, and every third-party library is
- * referenced only inside its packages, and by at least one of them.
+ * referenced only inside its packages, and by at least one of them. Also the one code rule
+ * that keeps formats exhaustive: no {@code instanceof} on a format record.
  *
  * <p>References are imports and qualified names ({@code dev.odetab.x.Y}) in code, with
  * comments removed; a sub-package ({@code tables.rows}) counts as its top-level package.
@@ -145,6 +146,21 @@ class ArchitectureTest {
                 }
             }
         }
+    }
+
+    @Test
+    void formatsAreSwitchedOverNeverTestedRecordByRecord() {
+        // Formats own their behaviour (Format's class comment): a switch expression over
+        // Format.kind() without default makes the compiler list every place a new format must
+        // be handled; an instanceof test on a format record would let it fall through silently.
+        Pattern test = Pattern.compile("instanceof\\s+(?:[\\w.]*\\.)?(?:BinaryFormat|DoubleDouble|DecimalFormat|FixedFormat)\\b");
+        List<String> found = new ArrayList<>();
+        sources.forEach((file, code) -> {
+            if (test.matcher(code).find()) {
+                found.add(file.toString());
+            }
+        });
+        assertEquals(List.of(), found, "instanceof on a format record");
     }
 
     @Test
