@@ -5,9 +5,11 @@ import dev.odetab.base.InputError;
 import dev.odetab.numeric.Format;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.FunctionDef;
+import dev.odetab.ode.family.Catalog;
 import dev.odetab.ode.family.Family;
+import dev.odetab.ode.family.OrthogonalFamily;
 import dev.odetab.tables.Column;
-import dev.odetab.tables.quadrature.GaussFamily;
+import dev.odetab.tables.quadrature.GaussPolynomial;
 import dev.odetab.tables.TableKind;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
@@ -40,7 +42,7 @@ final class SpecQuadrature {
                 throw spec.error(child(base, key), "a quadrature table takes no '" + key + "': its points are the nodes of the Gauss rule");
             }
         }
-        GaussFamily family = family(child(base, "function"), fname, f);
+        GaussPolynomial rule = rule(child(base, "function"), fname, f);
         boolean flush = false;
         if (t.contains("weight_underflow")) {
             List<String> key = child(base, "weight_underflow");
@@ -55,7 +57,7 @@ final class SpecQuadrature {
             }
             flush = v.equals("flush");
         }
-        List<Column> columns = columns(base, t, family);
+        List<Column> columns = columns(base, t, rule);
         if (flush) {
             int w = columns.stream().map(Column::name).toList().indexOf("weight");
             if (w < 0) {
@@ -63,31 +65,27 @@ final class SpecQuadrature {
             }
             columns.add(w + 1, Column.quadrature("weight_flag"));
         }
-        return new Parsed(new TableKind.Quadrature(family, flush), columns);
+        return new Parsed(new TableKind.Quadrature(rule, flush), columns);
     }
 
     /** The rule of the function: a family with a Gauss rule, an integer degree n from 1 to the cap. */
-    private GaussFamily family(List<String> key, String fname, FunctionDef f) throws InputError {
+    private GaussPolynomial rule(List<String> key, String fname, FunctionDef f) throws InputError {
         Family family = spec.family(fname).orElseThrow(() -> spec.error(key, "a quadrature table needs a function defined with the family of its Gauss rule ("
-                + GaussFamily.Kind.names() + ") and its degree n; '" + fname + "' is "
+                + Catalog.gaussRuleNames() + ") and its degree n; '" + fname + "' is "
                 + (spec.functionNames().contains(fname) ? "an equation of its own" : "a built-in family without a Gauss rule")));
-        GaussFamily.Kind kind = GaussFamily.Kind.of(family).orElseThrow(() -> spec.error(key, "the family " + family.name()
-                + " of function '" + fname + "' has no Gauss rule (quadrature tables take " + GaussFamily.Kind.names() + ")"));
+        if (!(family instanceof OrthogonalFamily orthogonal)) {
+            throw spec.error(key, "the family " + family.name()
+                    + " of function '" + fname + "' has no Gauss rule (quadrature tables take " + Catalog.gaussRuleNames() + ")");
+        }
         Rational n = f.parameters().get("n");
-        if (!n.isInteger() || n.signum() <= 0 || n.compareTo(Rational.of(GaussFamily.MAX_NODES)) > 0) {
-            throw spec.error(key, "a Gauss rule has an integer number of nodes n from 1 to " + GaussFamily.MAX_NODES
+        if (!n.isInteger() || n.signum() <= 0 || n.compareTo(Rational.of(GaussPolynomial.MAX_NODES)) > 0) {
+            throw spec.error(key, "a Gauss rule has an integer number of nodes n from 1 to " + GaussPolynomial.MAX_NODES
                     + ", and function '" + fname + "' has n = " + n.toDecimalOrFraction());
         }
-        Rational a = switch (kind) {
-            case LAGUERRE, JACOBI -> f.parameters().get("alpha");
-            case GEGENBAUER -> f.parameters().get("lambda");
-            default -> Rational.ZERO;
-        };
-        Rational b = kind == GaussFamily.Kind.JACOBI ? f.parameters().get("beta") : Rational.ZERO;
-        return new GaussFamily(kind, n.numerator().intValueExact(), a, b);
+        return new GaussPolynomial(orthogonal, n.numerator().intValueExact(), f.parameters());
     }
 
-    private List<Column> columns(List<String> base, TomlTable t, GaussFamily family) throws InputError {
+    private List<Column> columns(List<String> base, TomlTable t, GaussPolynomial rule) throws InputError {
         List<Column> r = new ArrayList<>();
         if (!t.contains("columns")) {
             r.add(Column.quadrature("node"));
@@ -108,9 +106,9 @@ final class SpecQuadrature {
                 throw new InputError(where, "column '" + given + "' is not available in a quadrature table"
                         + Suggestions.hint(given, COLUMNS) + " (available: " + String.join(", ", COLUMNS) + ")");
             }
-            if (given.equals("scaled_weight") && !family.hasScaledWeight()) {
+            if (given.equals("scaled_weight") && !rule.hasScaledWeight()) {
                 throw new InputError(where, "column 'scaled_weight' belongs to Gauss–Hermite (w·e^(x²)) and Gauss–Laguerre (w·e^x) rules; "
-                        + "this table's rule is " + family.kind().family());
+                        + "this table's rule is " + rule.family().name());
             }
             if (!seen.add(given)) {
                 throw new InputError(where, "column '" + given + "' appears twice");

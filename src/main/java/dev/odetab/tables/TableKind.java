@@ -3,7 +3,7 @@ package dev.odetab.tables;
 import dev.odetab.base.ExprException;
 import dev.odetab.numeric.Rational;
 import dev.odetab.series.PrecisionCapException;
-import dev.odetab.tables.quadrature.GaussFamily;
+import dev.odetab.tables.quadrature.GaussPolynomial;
 import java.util.Optional;
 
 /**
@@ -115,11 +115,11 @@ public sealed interface TableKind {
     /**
      * A quadrature table: the n nodes of a Gauss rule and their weights.
      *
-     * @param family the rule
+     * @param rule the rule: the family's polynomial p_n, whose zeros are the nodes
      * @param flushUnderflow true when a weight below the format's smallest normal number is
      *     written as 0 and flagged (weight_underflow = "flush"); false when it is an error
      */
-    record Quadrature(GaussFamily family, boolean flushUnderflow) implements Found {
+    record Quadrature(GaussPolynomial rule, boolean flushUnderflow) implements Found {
         @Override
         public TableResult evaluate(TableDef t, Evaluators e) throws ExprException, PrecisionCapException, OutOfRangeException {
             return e.quadrature(t, this);
@@ -127,13 +127,13 @@ public sealed interface TableKind {
 
         @Override
         public long rowsBeforeEvaluation() {
-            return family.n();
+            return rule.n();
         }
 
         @Override
         public String describe() {
-            return family.describe() + "; nodes ascending, each zero of p_" + family.n()
-                    + " proven by interval Newton from an exact center, all " + family.n() + " counted by disjoint enclosures"
+            return rule.describe() + "; nodes ascending, each zero of p_" + rule.n()
+                    + " proven by interval Newton from an exact center, all " + rule.n() + " counted by disjoint enclosures"
                     + (flushUnderflow ? "; weights below the smallest normal number flushed to 0 and flagged in weight_flag" : "");
         }
     }

@@ -71,7 +71,7 @@ class TableKindTest {
 
                 @Override
                 public TableResult quadrature(TableDef table, TableKind.Quadrature kind) {
-                    reached.add(table.name() + ":quadrature" + kind.family().n());
+                    reached.add(table.name() + ":quadrature" + kind.rule().n());
                     return null;
                 }
             });

@@ -1,6 +1,7 @@
 package dev.odetab.ode.family;
 
 import dev.odetab.numeric.Rational;
+import java.math.BigInteger;
 
 /** Checks and exact constants shared by families whose parameter is an integer degree. */
 final class Degrees {
@@ -47,13 +48,21 @@ final class Degrees {
         return value;
     }
 
-    /** The Pochhammer symbol (a)_k = a (a + 1) … (a + k − 1), exactly (DLMF 5.2.4). */
+    /** The Pochhammer symbol (a)_k = a (a + 1) … (a + k − 1), exactly (DLMF 5.2.4); one reduction at the end. */
     static Rational pochhammer(Rational a, int k) {
-        Rational p = Rational.ONE;
+        BigInteger num = BigInteger.ONE;
+        BigInteger den = BigInteger.ONE;
         for (int i = 0; i < k; i++) {
-            p = p.multiply(a.add(Rational.of(i)));
+            Rational f = a.add(Rational.of(i));
+            num = num.multiply(f.numerator());
+            den = den.multiply(f.denominator());
         }
-        return p;
+        return Rational.of(num, den);
+    }
+
+    /** k!, exactly. */
+    static Rational factorial(int k) {
+        return pochhammer(Rational.ONE, k);
     }
 
     /** (−1)^k. */

@@ -1,6 +1,7 @@
 package dev.odetab.ode.family;
 
 import dev.odetab.expr.Poly;
+import dev.odetab.numeric.BallFunctions;
 import dev.odetab.numeric.Rational;
 import dev.odetab.ode.Equation;
 import dev.odetab.ode.FunctionDef;
@@ -19,8 +20,12 @@ import java.util.Map;
  * is H_n (DLMF 12.7.2 with He_n(x) = 2^(−n/2) H_n(x/√2), DLMF 18.7). Substituting a = −ν − 1/2
  * in DLMF 12.2.6 and 12.2.7 gives H_ν(0) = 2^ν √π / Γ((1 − ν)/2) and
  * H_ν'(0) = 2^((ν+1)/2) U'(a, 0) = −2^(ν+1) √π / Γ(−ν/2).
+ *
+ * <p>Gauss–Hermite rule: weight e^(−x²) on (−∞, ∞); A_k = 2, B_k = 0, C_k = 2k (DLMF 18.9.1,
+ * Table 18.9.1). Weights w = 2^(n−1) n! √π / (n² H_(n−1)(x)²) (A&amp;S 25.4.46); with
+ * H_n' = 2n H_(n−1) (DLMF 18.9.25): w = 2^(n+1) n! √π / H_n'(x)², so K = 2^(n+1) n! √π.
  */
-public final class HermiteH implements Family {
+public final class HermiteH implements OrthogonalFamily {
     static final Rational MAX_ABS_ORDER = Rational.of(Degrees.MAX_DEGREE);
     private static final String RANGE = "an integer 0 <= n <= " + Degrees.MAX_DEGREE
             + ", or a non-integer rational with |n| <= " + Degrees.MAX_DEGREE;
@@ -67,5 +72,31 @@ public final class HermiteH implements Family {
         String slope = "-2^(" + v + "+1)*sqrt(pi)/gamma(-" + v + "/2)";
         return new FunctionDef(name(), eq, Rational.ZERO, Normalizations.parse(value, Map.of()),
                 Normalizations.parse(slope, Map.of()), Map.of("n", nu), "DLMF 18.8 (Table 18.8.1), 12.1, 12.2.6, 12.2.7");
+    }
+
+    @Override
+    public String ruleName() {
+        return "Gauss–Hermite";
+    }
+
+    @Override
+    public String weightFunction() {
+        return "e^(-x^2) on (-inf, inf)";
+    }
+
+    @Override
+    public Interval interval() {
+        return Interval.REAL_LINE;
+    }
+
+    @Override
+    public Rational[] threeTerm(int k, Map<String, Rational> parameters) {
+        return new Rational[] {Rational.TWO, Rational.ZERO, Rational.of(2L * k)};
+    }
+
+    @Override
+    public WeightConstant weightConstant(int n, Map<String, Rational> parameters) {
+        return new WeightConstant(Rational.TWO.pow(n + 1).multiply(Degrees.factorial(n)),
+                p -> BallFunctions.sqrt(BallFunctions.pi(p + 4), p));
     }
 }

@@ -13,8 +13,12 @@ import java.util.Map;
  * (DLMF 14.2.1 with μ = 0, 18.8 Table 18.8.1). At 0, DLMF 14.5.1 and 14.5.2 with μ = 0 reduce for
  * integer n to P_n(0) = (−1)^(n/2) binom(n, n/2) / 2^n for even n and 0 for odd n, and
  * P_n'(0) = n P_(n−1)(0) (also DLMF 14.10.5 at x = 0: (1 − x²) P_n' = n (P_(n−1) − x P_n)).
+ *
+ * <p>Gauss–Legendre rule: weight 1 on (−1, 1); A_k = (2k + 1)/(k + 1), B_k = 0, C_k = k/(k + 1)
+ * (DLMF 18.9.1, Table 18.9.1); the Jacobi constant of {@link JacobiP} at α = β = 0 is K = 2
+ * (A&amp;S 25.4.29).
  */
-public final class LegendreP implements Family {
+public final class LegendreP implements OrthogonalFamily {
     @Override
     public String name() {
         return "legendre-p";
@@ -59,5 +63,30 @@ public final class LegendreP implements Family {
             binom = binom.multiply(BigInteger.valueOf(n / 2 + k)).divide(BigInteger.valueOf(k));
         }
         return Rational.of(binom.multiply(BigInteger.valueOf(Degrees.sign(n / 2))), BigInteger.ONE.shiftLeft(n));
+    }
+
+    @Override
+    public String ruleName() {
+        return "Gauss–Legendre";
+    }
+
+    @Override
+    public String weightFunction() {
+        return "1 on (-1, 1)";
+    }
+
+    @Override
+    public Interval interval() {
+        return Interval.FINITE;
+    }
+
+    @Override
+    public Rational[] threeTerm(int k, Map<String, Rational> parameters) {
+        return new Rational[] {Rational.of(2L * k + 1, k + 1L), Rational.ZERO, Rational.of(k, k + 1L)};
+    }
+
+    @Override
+    public WeightConstant weightConstant(int n, Map<String, Rational> parameters) {
+        return new WeightConstant(Rational.TWO, null);
     }
 }

@@ -17,6 +17,7 @@ import dev.odetab.numeric.Precision;
 import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.Rounding;
 import dev.odetab.ode.Equation;
+import dev.odetab.ode.family.OrthogonalFamily;
 import dev.odetab.series.Jet;
 import dev.odetab.series.LocalSeries;
 import dev.odetab.series.Recurrence;
@@ -29,6 +30,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
+import java.util.OptionalInt;
 
 /**
  * Gauss quadrature rules as tables: the n nodes ascending and their weights, each entry correctly
@@ -37,7 +39,7 @@ import java.util.Optional;
  * <p>Trust level: Rigorous. Nodes. The zeros of p_n are simple and lie in the open interval of
  * orthogonality (DLMF 18.2(vi)). Eigenvalues of the Jacobi matrix in doubles (Golub and Welsch
  * 1969, by Sturm-sequence bisection) only seed the proof. Near each seed s a short dyadic center
- * c is taken; p_n(c) and p_n'(c) are computed exactly ({@link GaussFamily.Evaluator}),
+ * c is taken; p_n(c) and p_n'(c) are computed exactly ({@link GaussPolynomial.Evaluator}),
  * and the family's differential equation (DLMF 18.8) carries them to c + t by the Taylor series
  * of {@link LocalSeries}, whose tail bound is rigorous for points and for balls. Newton's method
  * on the midpoints brings t close to the zero; then one interval Newton step (Moore 1966):
@@ -54,7 +56,7 @@ import java.util.Optional;
  * with n = 2 or 3 have x² = r rational, read off the recurrence, so their weights are exact
  * rationals times the family constant.
  *
- * <p>Weights: w = K / g(x, p_n'(x)) ({@link GaussFamily}), with p_n' enclosed over X. Precision:
+ * <p>Weights: w = K / g(x, p_n'(x)) ({@link GaussPolynomial}), with p_n' enclosed over X. Precision:
  * Ziv's loop per node, from the format's bits plus guard bits, doubling up to the table's cap
  * ({@link PrecisionCapException} beyond it).
  *
@@ -107,13 +109,14 @@ public final class GaussRule {
      */
     public static TableResult table(TableDef t, TableKind.Quadrature q)
             throws PrecisionCapException, OutOfRangeException {
-        GaussFamily f = q.family();
+        GaussPolynomial f = q.rule();
         int n = f.n();
         List<NodeSource> sources = new ArrayList<>();
-        boolean mirror = f.symmetric() && f.kind() != GaussFamily.Kind.CHEBYSHEV_T && f.kind() != GaussFamily.Kind.CHEBYSHEV_U;
-        if (!mirror && f.symmetric()) {
+        OptionalInt chebyshevKind = f.family().chebyshevNodes();
+        boolean mirror = f.symmetric() && chebyshevKind.isEmpty();
+        if (chebyshevKind.isPresent()) {
             for (int i = 0; i < n; i++) {
-                sources.add(chebyshevNode(f, i));
+                sources.add(chebyshevNode(f, chebyshevKind.getAsInt(), i));
             }
         } else if (mirror && n <= 3) {
             if (n > 1) {
@@ -123,7 +126,7 @@ public final class GaussRule {
             int first = mirror ? (n + 1) / 2 : 0;
             double[] seeds = eigenvaluesEstimate(f, first, n);
             Equation eq = t.function().equation();
-            GaussFamily.Evaluator exact = f.new Evaluator();
+            GaussPolynomial.Evaluator exact = f.new Evaluator();
             for (int i = 0; i < seeds.length; i++) {
                 sources.add(new NewtonNode(f, exact, eq, seeds[i], gapEstimate(f, seeds, i, mirror), t));
             }
@@ -175,7 +178,7 @@ public final class GaussRule {
                 // the loop below raises the precision
             }
             prec = PrecisionLoop.raise(prec, t.capBits(), () -> "table " + t.name() + ": the precision cap of " + t.capBits()
-                    + " bits cannot decide a node of the " + q.family().describe() + " near x = "
+                    + " bits cannot decide a node of the " + q.rule().describe() + " near x = "
                     + approximateNode(s) + " (raise precision_cap_bits, or an entry may be an exact rounding boundary)");
         }
     }
@@ -221,7 +224,7 @@ public final class GaussRule {
                 case "weight" -> entry = w;
                 case "weight_flag" -> entry = round(t, flushed ? Rational.ONE : Rational.ZERO);
                 default -> {
-                    Ball scaled = weight.multiply(q.family().scale(node, wp), wp);
+                    Ball scaled = weight.multiply(q.rule().scale(node, wp), wp);
                     Optional<Entry> se = decide(t, scaled);
                     if (se.isEmpty()) {
                         return null;
@@ -252,8 +255,8 @@ public final class GaussRule {
                 + " underflows " : tiny.size() + " weights, at nodes from x = " + first + " to x = " + last + ", underflow ")
                 + t.format().name() + (tiny.size() == 1 ? " (its correctly rounded value lies" : " (their correctly rounded values lie")
                 + " below the smallest normal number); set weight_underflow = \"flush\" (" + (tiny.size() == 1 ? "it becomes" : "they become")
-                + " 0, flagged 1 in the column weight_flag)" + (q.family().hasScaledWeight() ? " or use the column scaled_weight ("
-                + q.family().scaledWeightFormula() + ", which does not underflow) instead of weight" : " or choose a wider format"));
+                + " 0, flagged 1 in the column weight_flag)" + q.rule().scaledWeightFormula().map(formula -> " or use the column scaled_weight ("
+                + formula + ", which does not underflow) instead of weight").orElse(" or choose a wider format"));
     }
 
     private static Entry round(TableDef t, Rational exact) {
@@ -302,8 +305,8 @@ public final class GaussRule {
      * The exact node x with p_n'(x) = d: its weight exactly when K is rational, otherwise K
      * enclosed at the precision asked for and divided by the exact g.
      */
-    private static NodeSource exactNode(GaussFamily f, Rational x, Rational d) {
-        GaussFamily.Constant k = f.weightConstant();
+    private static NodeSource exactNode(GaussPolynomial f, Rational x, Rational d) {
+        OrthogonalFamily.WeightConstant k = f.weightConstant();
         Rational g = f.weightDenominatorExact(x, d);
         Rational exactWeight = k.isRational() ? k.rational().divide(g) : null;
         return prec -> new Enclosure(x, null, exactWeight, exactWeight != null ? null : k.enclose(prec + 20).divide(g, prec + 20));
@@ -312,13 +315,14 @@ public final class GaussRule {
     // ------------------------------------------------------------------ closed forms
 
     /**
-     * Chebyshev node i (ascending): T_n: x = cos((2k−1)π/(2n)), w = π/n; U_n: x = cos(kπ/(n+1)),
+     * Chebyshev node i (ascending) of a rule whose nodes are the Chebyshev points of the given kind
+     * ({@link OrthogonalFamily#chebyshevNodes}): T_n: x = cos((2k−1)π/(2n)), w = π/n; U_n: x = cos(kπ/(n+1)),
      * w = π/(n+1) · (1 − x²) = π/(n+1) sin²(kπ/(n+1)) (DLMF 3.5(v); A&amp;S 25.4.38, 25.4.40). The
      * nodes are the points of {@link Grid.Chebyshev} on [−1, 1] (first kind, or the interior
      * points of the second kind with n + 2 points).
      */
-    private static NodeSource chebyshevNode(GaussFamily f, int i) {
-        boolean first = f.kind() == GaussFamily.Kind.CHEBYSHEV_T;
+    private static NodeSource chebyshevNode(GaussPolynomial f, int chebyshevKind, int i) {
+        boolean first = chebyshevKind == 1;
         Grid.Chebyshev grid = first ? new Grid.Chebyshev(1, f.n(), Rational.of(-1), Rational.ONE)
                 : new Grid.Chebyshev(2, f.n() + 2, Rational.of(-1), Rational.ONE);
         int index = first ? i : i + 1;
@@ -342,7 +346,7 @@ public final class GaussRule {
      * recurrence with B_k = 0): x² = r = C_1/a, resp. b/a, and p_n'(x)² = 4a² r, resp.
      * (3a r − b)² = 4b². Exact: r and p_n'(x)², so g and, for a rational K, the weight.
      */
-    private static NodeSource squareRootNode(GaussFamily f) {
+    private static NodeSource squareRootNode(GaussPolynomial f) {
         Rational[] t0 = f.threeTerm(0);
         Rational[] t1 = f.threeTerm(1);
         Rational r;
@@ -360,7 +364,7 @@ public final class GaussRule {
         }
         Rational root = rationalSquareRoot(r);
         Rational g = f.weightDenominatorFromSquares(r, d2);
-        GaussFamily.Constant k = f.weightConstant();
+        OrthogonalFamily.WeightConstant k = f.weightConstant();
         Rational exactWeight = k.isRational() ? k.rational().divide(g) : null;
         return prec -> {
             int wp = prec + 20;
@@ -380,11 +384,11 @@ public final class GaussRule {
 
     /**
      * Heuristic: the eigenvalues with indices from … to − 1 (ascending) of the Jacobi matrix of
-     * {@link GaussFamily#monicRecurrenceEstimate}, by bisection on the Sturm count: the number of
+     * {@link GaussPolynomial#monicRecurrenceEstimate}, by bisection on the Sturm count: the number of
      * negative pivots of J − xI = LDLᵀ, d_0 = α_0 − x, d_k = α_k − x − β_k/d_(k−1), is the number
      * of eigenvalues below x. Gerschgorin's disks bound the search. Seeds only.
      */
-    static double[] eigenvaluesEstimate(GaussFamily f, int from, int to) {
+    static double[] eigenvaluesEstimate(GaussPolynomial f, int from, int to) {
         double[][] ab = f.monicRecurrenceEstimate();
         double[] alpha = ab[0];
         double[] beta = ab[1];
@@ -422,7 +426,7 @@ public final class GaussRule {
      * Heuristic: the distance from seed i to the nearest other zero (the mirror images and 0
      * included for symmetric rules) or end of the interval of orthogonality.
      */
-    private static double gapEstimate(GaussFamily f, double[] seeds, int i, boolean mirror) {
+    private static double gapEstimate(GaussPolynomial f, double[] seeds, int i, boolean mirror) {
         double s = seeds[i];
         double gap = Double.POSITIVE_INFINITY;
         if (i > 0) {
@@ -433,12 +437,11 @@ public final class GaussRule {
         if (i + 1 < seeds.length) {
             gap = Math.min(gap, seeds[i + 1] - s);
         }
-        if (f.kind() == GaussFamily.Kind.LAGUERRE) {
-            gap = Math.min(gap, s);
-        } else if (f.kind() != GaussFamily.Kind.HERMITE) {
-            gap = Math.min(gap, 1 - Math.abs(s));
-        }
-        return gap;
+        return switch (f.family().interval()) {
+            case FINITE -> Math.min(gap, 1 - Math.abs(s));
+            case HALF_LINE -> Math.min(gap, s);
+            case REAL_LINE -> gap;
+        };
     }
 
     private static int countBelowEstimate(double[] alpha, double[] beta, double x) {
@@ -460,17 +463,17 @@ public final class GaussRule {
 
     /** One zero of p_n near a seed, proven by interval Newton from an exact center (class comment). */
     private static final class NewtonNode implements NodeSource {
-        private final GaussFamily f;
-        private final GaussFamily.Evaluator exact;
+        private final GaussPolynomial f;
+        private final GaussPolynomial.Evaluator exact;
         private final TableDef table;
         private final Rational center;
-        private final GaussFamily.ExactJet atCenter;
+        private final GaussPolynomial.ExactJet atCenter;
         private final Recurrence recurrence;
         private final BigDecimal scale;
         /** The latest Newton point t (node ≈ center + t), kept across precisions. */
         private BigDecimal t = BigDecimal.ZERO;
 
-        NewtonNode(GaussFamily f, GaussFamily.Evaluator exact, Equation eq, double seed, double gap, TableDef table) {
+        NewtonNode(GaussPolynomial f, GaussPolynomial.Evaluator exact, Equation eq, double seed, double gap, TableDef table) {
             this.f = f;
             this.exact = exact;
             this.table = table;
@@ -562,7 +565,7 @@ public final class GaussRule {
             }
             for (Rational q : candidates) {
                 if (node.contains(q)) {
-                    GaussFamily.ExactJet jet = exact.at(q);
+                    GaussPolynomial.ExactJet jet = exact.at(q);
                     if (jet.isZero()) {
                         return Optional.of(exactNode(f, q, jet.slopeExact()));
                     }

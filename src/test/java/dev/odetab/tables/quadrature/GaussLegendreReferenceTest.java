@@ -120,12 +120,12 @@ class GaussLegendreReferenceTest {
         // factory serves the rising n; beyond n = 20 it takes seconds: the full sweep is slow
         GaussIntegratorFactory factory = new GaussIntegratorFactory();
         for (int n : new int[] {5, 8, 13, 20}) {
-            TableResult r = GaussRuleTest.rule(GaussFamily.Kind.LEGENDRE, n, GaussRuleTest.B64);
+            TableResult r = GaussRuleTest.rule(GaussRuleTest.LEGENDRE, n, GaussRuleTest.B64);
             assertApfloatAgrees(n, r);
             assertCommonsAgrees(n, r, factory);
         }
         for (int n : new int[] {64, 100}) {
-            assertApfloatAgrees(n, GaussRuleTest.rule(GaussFamily.Kind.LEGENDRE, n, GaussRuleTest.B64));
+            assertApfloatAgrees(n, GaussRuleTest.rule(GaussRuleTest.LEGENDRE, n, GaussRuleTest.B64));
         }
     }
 
@@ -134,7 +134,7 @@ class GaussLegendreReferenceTest {
     void everyRuleFromFiveToTwoHundredMatchesApfloatAndCommonsMath() throws Exception {
         GaussIntegratorFactory factory = new GaussIntegratorFactory();
         for (int n = 5; n <= 200; n++) {
-            TableResult r = GaussRuleTest.rule(GaussFamily.Kind.LEGENDRE, n, GaussRuleTest.B64);
+            TableResult r = GaussRuleTest.rule(GaussRuleTest.LEGENDRE, n, GaussRuleTest.B64);
             assertApfloatAgrees(n, r);
             assertCommonsAgrees(n, r, factory);
         }

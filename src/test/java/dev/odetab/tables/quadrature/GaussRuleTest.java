@@ -18,6 +18,7 @@ import dev.odetab.numeric.RoundingMode;
 import dev.odetab.numeric.Target;
 import dev.odetab.ode.FunctionDef;
 import dev.odetab.ode.family.Catalog;
+import dev.odetab.ode.family.OrthogonalFamily;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;
@@ -40,24 +41,31 @@ class GaussRuleTest {
     static final Format B64 = Format.BinaryFormat.BINARY64;
     static final Format D40 = new Format.DecimalFormat(40);
 
-    /** The catalog's member of the family of {@code kind} with degree n and parameters a (α or λ) and b (β). */
-    static FunctionDef definition(GaussFamily.Kind kind, int n, Rational a, Rational b) throws Exception {
+    static final OrthogonalFamily LEGENDRE = gauss("legendre-p");
+    static final OrthogonalFamily HERMITE = gauss("hermite-h");
+    static final OrthogonalFamily LAGUERRE = gauss("laguerre-l");
+    static final OrthogonalFamily CHEBYSHEV_T = gauss("chebyshev-t");
+    static final OrthogonalFamily CHEBYSHEV_U = gauss("chebyshev-u");
+    static final OrthogonalFamily GEGENBAUER = gauss("gegenbauer-c");
+    static final OrthogonalFamily JACOBI = gauss("jacobi-p");
+
+    /** The catalog's family with a Gauss rule of this name. */
+    static OrthogonalFamily gauss(String name) {
+        return Catalog.withGaussRules().stream().filter(f -> f.name().equals(name)).findFirst().orElseThrow();
+    }
+
+    /** The catalog's member of {@code family} with degree n and rule parameters a (α or λ) and b (β), in the family's order. */
+    static FunctionDef definition(OrthogonalFamily family, int n, Rational a, Rational b) throws Exception {
         Map<String, Rational> params = new HashMap<>(Map.of("n", Rational.of(n)));
-        switch (kind) {
-            case LAGUERRE -> params.put("alpha", a);
-            case GEGENBAUER -> params.put("lambda", a);
-            case JACOBI -> {
-                params.put("alpha", a);
-                params.put("beta", b);
-            }
-            default -> {
-            }
+        List<String> names = family.ruleParameters();
+        for (int i = 0; i < names.size(); i++) {
+            params.put(names.get(i), i == 0 ? a : b);
         }
-        return Catalog.lookup(kind.family()).orElseThrow().define(params);
+        return family.define(params);
     }
 
     /** The rule of family {@code kind} with n nodes, parameters a (α or λ) and b (β) as exact rationals. */
-    static TableResult rule(GaussFamily.Kind kind, int n, String a, String b, Format format, RoundingMode mode, boolean flush,
+    static TableResult rule(OrthogonalFamily kind, int n, String a, String b, Format format, RoundingMode mode, boolean flush,
             String... columns) throws Exception {
         Rational ra = a == null ? Rational.ZERO : Rational.parse(a);
         Rational rb = b == null ? Rational.ZERO : Rational.parse(b);
@@ -66,11 +74,11 @@ class GaussRuleTest {
         for (String c : columns.length == 0 ? new String[] {"node", "weight"} : columns) {
             cols.add(Column.quadrature(c));
         }
-        TableDef t = new TableDef("q", kind.family(), f, new TableKind.Quadrature(new GaussFamily(kind, n, ra, rb), flush), cols, Target.of(format, mode), 4096, List.of("csv"));
+        TableDef t = new TableDef("q", kind.name(), f, new TableKind.Quadrature(new GaussPolynomial(kind, n, f.parameters()), flush), cols, Target.of(format, mode), 4096, List.of("csv"));
         return TableEvaluator.evaluate(t);
     }
 
-    static TableResult rule(GaussFamily.Kind kind, int n, Format format) throws Exception {
+    static TableResult rule(OrthogonalFamily kind, int n, Format format) throws Exception {
         return rule(kind, n, null, null, format, RoundingMode.NEAREST_EVEN, false);
     }
 
@@ -107,11 +115,11 @@ class GaussRuleTest {
             // A&S Table 25.4 (nodes and weights; the weights by formula 25.4.29), recalled from memory and derived again from P_2 = (3x² − 1)/2, P_3 = (5x³ − 3x)/2):
             // n = 2: ±1/√3, weights 1; n = 3: 0, ±√(3/5), weights 8/9, 5/9
             Apfloat s3 = ApfloatMath.sqrt(ap("3"));
-            TableResult r2 = rule(GaussFamily.Kind.LEGENDRE, 2, f);
+            TableResult r2 = rule(LEGENDRE, 2, f);
             assertRow(r2, 0, ap("-1").divide(s3), ap("1"), "GL2");
             assertRow(r2, 1, ap("1").divide(s3), ap("1"), "GL2");
             Apfloat s35 = ApfloatMath.sqrt(ap("3").divide(ap("5")));
-            TableResult r3 = rule(GaussFamily.Kind.LEGENDRE, 3, f);
+            TableResult r3 = rule(LEGENDRE, 3, f);
             assertRow(r3, 0, s35.negate(), ap("5").divide(ap("9")), "GL3");
             assertRow(r3, 1, ap("0"), ap("8").divide(ap("9")), "GL3");
             assertRow(r3, 2, s35, ap("5").divide(ap("9")), "GL3");
@@ -124,7 +132,7 @@ class GaussRuleTest {
             Apfloat s70 = ApfloatMath.sqrt(ap("70"));
             Apfloat wInner = ap("322").add(ap("13").multiply(s70)).divide(ap("900"));
             Apfloat wOuter = ap("322").subtract(ap("13").multiply(s70)).divide(ap("900"));
-            TableResult r5 = rule(GaussFamily.Kind.LEGENDRE, 5, f);
+            TableResult r5 = rule(LEGENDRE, 5, f);
             assertRow(r5, 0, outer.negate(), wOuter, "GL5");
             assertRow(r5, 1, inner.negate(), wInner, "GL5");
             assertRow(r5, 2, ap("0"), ap("128").divide(ap("225")), "GL5");
@@ -139,12 +147,12 @@ class GaussRuleTest {
         // Legendre: P_1 = x, μ_0 = 2; Hermite: H_1 = 2x, μ_0 = √π (DLMF 5.2.1 with Γ(1/2) = √π);
         // Jacobi: P_1^(α,β) = (α+β+2)x/2 + (α−β)/2 (DLMF 18.5.7), node (β−α)/(α+β+2), μ_0 of DLMF 5.12.1
         for (Format f : List.of(B64, D40)) {
-            TableResult p1 = rule(GaussFamily.Kind.LEGENDRE, 1, f);
+            TableResult p1 = rule(LEGENDRE, 1, f);
             assertRow(p1, 0, ap("0"), ap("2"), "GL1");
             assertEquals(Rational.ZERO, p1.rows().get(0).x());
-            assertRow(rule(GaussFamily.Kind.HERMITE, 1, f), 0, ap("0"), ApfloatMath.sqrt(ApfloatMath.pi(DIGITS)), "GH1");
-            TableResult j1 = rule(GaussFamily.Kind.JACOBI, 1, "1/2", "2", f, RoundingMode.NEAREST_EVEN, false);
-            assertRow(j1, 0, ap("3").divide(ap("9")), mu0(GaussFamily.Kind.JACOBI, Rational.of(1, 2), Rational.TWO), "GJ1");
+            assertRow(rule(HERMITE, 1, f), 0, ap("0"), ApfloatMath.sqrt(ApfloatMath.pi(DIGITS)), "GH1");
+            TableResult j1 = rule(JACOBI, 1, "1/2", "2", f, RoundingMode.NEAREST_EVEN, false);
+            assertRow(j1, 0, ap("3").divide(ap("9")), mu0(JACOBI, Rational.of(1, 2), Rational.TWO), "GJ1");
         }
     }
 
@@ -154,11 +162,11 @@ class GaussRuleTest {
         // n = 3: 0, ±√(3/2), w = 2√π/3 at 0 and √π/6 at ±√(3/2)
         Apfloat sqrtPi = ApfloatMath.sqrt(ApfloatMath.pi(DIGITS));
         for (Format f : List.of(B64, D40)) {
-            TableResult r2 = rule(GaussFamily.Kind.HERMITE, 2, f);
+            TableResult r2 = rule(HERMITE, 2, f);
             Apfloat x2 = ap("1").divide(ApfloatMath.sqrt(ap("2")));
             assertRow(r2, 0, x2.negate(), sqrtPi.divide(ap("2")), "GH2");
             assertRow(r2, 1, x2, sqrtPi.divide(ap("2")), "GH2");
-            TableResult r3 = rule(GaussFamily.Kind.HERMITE, 3, f);
+            TableResult r3 = rule(HERMITE, 3, f);
             Apfloat x3 = ApfloatMath.sqrt(ap("3").divide(ap("2")));
             assertRow(r3, 0, x3.negate(), sqrtPi.divide(ap("6")), "GH3");
             assertRow(r3, 1, ap("0"), sqrtPi.multiply(ap("2")).divide(ap("3")), "GH3");
@@ -197,9 +205,9 @@ class GaussRuleTest {
         sizes.add(97);
         for (int n : sizes) {
             // DLMF 3.5.23 / A&S 25.4.38: x_k = cos((2k − 1)π/(2n)), w = π/n
-            TableResult t = rule(GaussFamily.Kind.CHEBYSHEV_T, n, B64);
+            TableResult t = rule(CHEBYSHEV_T, n, B64);
             // DLMF 3.5(v) / A&S 25.4.40: x_k = cos(kπ/(n + 1)), w = π/(n + 1) sin²(kπ/(n + 1))
-            TableResult u = rule(GaussFamily.Kind.CHEBYSHEV_U, n, B64);
+            TableResult u = rule(CHEBYSHEV_U, n, B64);
             Apfloat[] ct = cosMultiples(2L * n);
             Apfloat[] cu = cosMultiples(n + 1L);
             for (int i = 0; i < n; i++) {
@@ -227,14 +235,14 @@ class GaussRuleTest {
             // at α = β = 0 is the Legendre rule (P^(0,0) = P, DLMF 18.7.9), at α = β = −1/2 the Chebyshev T
             // rule (DLMF 18.7.3) and at α = β = 1/2 the Chebyshev U rule (DLMF 18.7.4) in closed form;
             // Gegenbauer λ = 1/2 is Legendre and λ = 1 is Chebyshev U (DLMF 18.7.9, 18.7.4).
-            assertSameRule(rule(GaussFamily.Kind.LEGENDRE, 10, f), rule(GaussFamily.Kind.JACOBI, 10, "0", "0", f, ne, false), "Jacobi(0,0)");
-            assertSameRule(rule(GaussFamily.Kind.CHEBYSHEV_T, 9, f), rule(GaussFamily.Kind.JACOBI, 9, "-1/2", "-1/2", f, ne, false),
+            assertSameRule(rule(LEGENDRE, 10, f), rule(JACOBI, 10, "0", "0", f, ne, false), "Jacobi(0,0)");
+            assertSameRule(rule(CHEBYSHEV_T, 9, f), rule(JACOBI, 9, "-1/2", "-1/2", f, ne, false),
                     "Jacobi(-1/2,-1/2)");
-            assertSameRule(rule(GaussFamily.Kind.CHEBYSHEV_U, 11, f), rule(GaussFamily.Kind.JACOBI, 11, "1/2", "1/2", f, ne, false),
+            assertSameRule(rule(CHEBYSHEV_U, 11, f), rule(JACOBI, 11, "1/2", "1/2", f, ne, false),
                     "Jacobi(1/2,1/2)");
-            assertSameRule(rule(GaussFamily.Kind.LEGENDRE, 9, f), rule(GaussFamily.Kind.GEGENBAUER, 9, "1/2", null, f, ne, false),
+            assertSameRule(rule(LEGENDRE, 9, f), rule(GEGENBAUER, 9, "1/2", null, f, ne, false),
                     "Gegenbauer(1/2)");
-            assertSameRule(rule(GaussFamily.Kind.CHEBYSHEV_U, 8, f), rule(GaussFamily.Kind.GEGENBAUER, 8, "1", null, f, ne, false),
+            assertSameRule(rule(CHEBYSHEV_U, 8, f), rule(GEGENBAUER, 8, "1", null, f, ne, false),
                     "Gegenbauer(1)");
         }
     }
@@ -246,9 +254,9 @@ class GaussRuleTest {
      * μ_0 = 2^(α+β+1) Γ(α+1) Γ(β+1)/Γ(α+β+2). Hermite: M_k = Γ((k+1)/2) for even k, 0 for odd
      * (DLMF 5.2.1), so M_k/√π = Π_(j=1..k/2) (2j − 1)/2. Laguerre: M_k = Γ(k+α+1) = Γ(α+1) (α+1)_k.
      */
-    static Rational momentRatio(GaussFamily.Kind kind, Rational alpha, Rational beta, int k) {
-        switch (kind) {
-            case HERMITE -> {
+    static Rational momentRatio(OrthogonalFamily kind, Rational alpha, Rational beta, int k) {
+        switch (kind.interval()) {
+            case REAL_LINE -> {
                 if (k % 2 == 1) {
                     return Rational.ZERO;
                 }
@@ -258,8 +266,12 @@ class GaussRuleTest {
                 }
                 return m;
             }
-            case LAGUERRE -> {
-                return GaussFamily.pochhammer(alpha.add(Rational.ONE), k);
+            case HALF_LINE -> {
+                Rational m = Rational.ONE;
+                for (int j = 1; j <= k; j++) {
+                    m = m.multiply(alpha.add(Rational.of(j)));
+                }
+                return m;
             }
             default -> {
                 // term_j = C(k, j) 2^j (−1)^(k−j) (β+1)_j/(α+β+2)_j, each from the one before
@@ -279,11 +291,11 @@ class GaussRuleTest {
         return ApfloatMath.gamma(new Apfloat(q.numerator(), DIGITS + 10).divide(new Apfloat(q.denominator(), DIGITS + 10)));
     }
 
-    static Apfloat mu0(GaussFamily.Kind kind, Rational alpha, Rational beta) {
-        return switch (kind) {
-            case HERMITE -> ApfloatMath.sqrt(ApfloatMath.pi(DIGITS + 10));
-            case LAGUERRE -> gamma(alpha.add(Rational.ONE));
-            default -> {
+    static Apfloat mu0(OrthogonalFamily kind, Rational alpha, Rational beta) {
+        return switch (kind.interval()) {
+            case REAL_LINE -> ApfloatMath.sqrt(ApfloatMath.pi(DIGITS + 10));
+            case HALF_LINE -> gamma(alpha.add(Rational.ONE));
+            case FINITE -> {
                 Rational e = alpha.add(beta).add(Rational.ONE);
                 Apfloat two = ApfloatMath.pow(new Apfloat(2, DIGITS + 10),
                         new Apfloat(e.numerator(), DIGITS + 10).divide(new Apfloat(e.denominator(), DIGITS + 10)));
@@ -300,21 +312,17 @@ class GaussRuleTest {
      * (weights are positive). The sums of entries carry 100 digits; M_k = μ_0 (M_k/μ_0) with μ_0 to
      * 60 digits, whose error is far below the bound.
      */
-    static void assertExact(GaussFamily.Kind kind, int n, String a, String b, Format f) throws Exception {
+    static void assertExact(OrthogonalFamily kind, int n, String a, String b, Format f) throws Exception {
         Rational alpha = a == null ? Rational.ZERO : Rational.parse(a);
         Rational beta = b == null ? Rational.ZERO : Rational.parse(b);
-        switch (kind) {
-            case LEGENDRE, CHEBYSHEV_T, CHEBYSHEV_U -> {
-                Rational e = kind == GaussFamily.Kind.LEGENDRE ? Rational.ZERO : Rational.of(kind == GaussFamily.Kind.CHEBYSHEV_T ? -1 : 1, 2);
-                alpha = e;
-                beta = e;
-            }
-            case GEGENBAUER -> {
-                alpha = alpha.subtract(Rational.of(1, 2));
-                beta = alpha;
-            }
-            default -> {
-            }
+        // the Jacobi parameters of the weight function (DLMF 18.7.1, 18.7.3, 18.7.4, 18.7.9)
+        if (kind == LEGENDRE || kind == CHEBYSHEV_T || kind == CHEBYSHEV_U) {
+            Rational e = kind == LEGENDRE ? Rational.ZERO : Rational.of(kind == CHEBYSHEV_T ? -1 : 1, 2);
+            alpha = e;
+            beta = e;
+        } else if (kind == GEGENBAUER) {
+            alpha = alpha.subtract(Rational.of(1, 2));
+            beta = alpha;
         }
         TableResult r = rule(kind, n, a, b, f, RoundingMode.NEAREST_EVEN, false);
         Rational u = f instanceof Format.DecimalFormat d ? Rational.of(10).pow(1 - d.digits()).divide(Rational.TWO) : Rational.TWO.pow(-53);
@@ -350,25 +358,25 @@ class GaussRuleTest {
             Rational ratio = momentRatio(kind, alpha, beta, k);
             BigDecimal moment = mu0.multiply(ratio.toBigDecimal(mc), mc);
             BigDecimal error = sum.subtract(moment).abs();
-            assertTrue(error.compareTo(tolerance) <= 0, kind.family() + " n = " + n + " " + f.name() + ", x^" + k + ": |Σ w x^k − M_k| = "
+            assertTrue(error.compareTo(tolerance) <= 0, kind.name() + " n = " + n + " " + f.name() + ", x^" + k + ": |Σ w x^k − M_k| = "
                     + error + " > " + tolerance);
         }
     }
 
     @Test
     void everyRuleIntegratesPolynomialsUpToDegreeTwoNMinusOne() throws Exception {
-        assertExact(GaussFamily.Kind.LEGENDRE, 7, null, null, B64);
-        assertExact(GaussFamily.Kind.LEGENDRE, 40, null, null, D40);
-        assertExact(GaussFamily.Kind.HERMITE, 20, null, null, B64);
-        assertExact(GaussFamily.Kind.HERMITE, 33, null, null, D40);
-        assertExact(GaussFamily.Kind.LAGUERRE, 12, null, null, B64);
-        assertExact(GaussFamily.Kind.LAGUERRE, 15, "-1/3", null, D40);
-        assertExact(GaussFamily.Kind.CHEBYSHEV_T, 11, null, null, B64);
-        assertExact(GaussFamily.Kind.CHEBYSHEV_U, 10, null, null, D40);
-        assertExact(GaussFamily.Kind.GEGENBAUER, 9, "3/4", null, B64);
-        assertExact(GaussFamily.Kind.GEGENBAUER, 12, "-1/4", null, D40);
-        assertExact(GaussFamily.Kind.JACOBI, 8, "1/2", "-1/3", B64);
-        assertExact(GaussFamily.Kind.JACOBI, 13, "2", "5", D40);
+        assertExact(LEGENDRE, 7, null, null, B64);
+        assertExact(LEGENDRE, 40, null, null, D40);
+        assertExact(HERMITE, 20, null, null, B64);
+        assertExact(HERMITE, 33, null, null, D40);
+        assertExact(LAGUERRE, 12, null, null, B64);
+        assertExact(LAGUERRE, 15, "-1/3", null, D40);
+        assertExact(CHEBYSHEV_T, 11, null, null, B64);
+        assertExact(CHEBYSHEV_U, 10, null, null, D40);
+        assertExact(GEGENBAUER, 9, "3/4", null, B64);
+        assertExact(GEGENBAUER, 12, "-1/4", null, D40);
+        assertExact(JACOBI, 8, "1/2", "-1/3", B64);
+        assertExact(JACOBI, 13, "2", "5", D40);
     }
 
     @Test
@@ -377,11 +385,11 @@ class GaussRuleTest {
         // issue 6: n up to at least 500 for Legendre and Hermite, binary64 and decimal:40. Gauss–Hermite
         // n = 500 in binary64 has weights below 2^-1022 (nodes out to x ≈ 31, w ≈ e^(−x²)): its scaled
         // weights are checked against the decimal:40 rule instead (A&S 25.4.46 with the factor e^(x²)).
-        assertExact(GaussFamily.Kind.LEGENDRE, 500, null, null, B64);
-        assertExact(GaussFamily.Kind.LEGENDRE, 500, null, null, D40);
-        assertExact(GaussFamily.Kind.HERMITE, 500, null, null, D40);
-        TableResult scaled = rule(GaussFamily.Kind.HERMITE, 500, null, null, B64, RoundingMode.NEAREST_EVEN, false, "node", "scaled_weight");
-        TableResult reference = rule(GaussFamily.Kind.HERMITE, 500, D40);
+        assertExact(LEGENDRE, 500, null, null, B64);
+        assertExact(LEGENDRE, 500, null, null, D40);
+        assertExact(HERMITE, 500, null, null, D40);
+        TableResult scaled = rule(HERMITE, 500, null, null, B64, RoundingMode.NEAREST_EVEN, false, "node", "scaled_weight");
+        TableResult reference = rule(HERMITE, 500, D40);
         for (int i = 0; i < 500; i++) {
             BigDecimal x40 = reference.rows().get(i).entries().get(0).value().toBigDecimalExact();
             BigDecimal w40 = reference.rows().get(i).entries().get(1).value().toBigDecimalExact();
@@ -396,14 +404,14 @@ class GaussRuleTest {
         // L_1^(α)(x) = α + 1 − x (DLMF 18.5.12): the one node is α + 1 and its weight μ_0 = Γ(α + 1).
         // α = 1/10: the node 11/10 is a decimal rounding boundary when rounding down; the dyadic
         // centers never hit it, so the boundary test by exact evaluation must.
-        TableResult r = rule(GaussFamily.Kind.LAGUERRE, 1, "1/10", null, new Format.DecimalFormat(5), RoundingMode.DOWN, false);
+        TableResult r = rule(LAGUERRE, 1, "1/10", null, new Format.DecimalFormat(5), RoundingMode.DOWN, false);
         assertEquals(Rational.of(11, 10), r.rows().get(0).x());
         assertEquals("1.1000", r.rows().get(0).entries().get(0).decimalText());
         // Γ(1.1) = 0.95135076986687318… (DLMF 5.4, from memory; checked with apfloat)
         assertEquals(big(gamma(Rational.of(11, 10))).round(new MathContext(5, java.math.RoundingMode.DOWN)),
                 r.rows().get(0).entries().get(1).value().toBigDecimalExact());
         // Gauss–Legendre n = 2 rounded down: weights exactly 1 (A&S 25.4.29), nodes ±1/√3 rounded down
-        TableResult gl2 = rule(GaussFamily.Kind.LEGENDRE, 2, null, null, B64, RoundingMode.DOWN, false);
+        TableResult gl2 = rule(LEGENDRE, 2, null, null, B64, RoundingMode.DOWN, false);
         // the binary64 neighbours of 1/√3 (irrational, so strictly between them): down(1/√3) and
         // down(−1/√3) = −up(1/√3)
         BigDecimal x = big(ap("1").divide(ApfloatMath.sqrt(ap("3"))));
@@ -422,7 +430,7 @@ class GaussRuleTest {
     void weightsBelowTheNormalRangeAreAnErrorOrFlushedAndFlagged() throws Exception {
         // Gauss–Hermite n = 100: the outer weights are about e^(−x²) with x near 13.4, below the smallest
         // normal binary32 number 2^-126 (IEEE 754-2019 §3.3, §7.5)
-        GaussFamily.Kind h = GaussFamily.Kind.HERMITE;
+        OrthogonalFamily h = HERMITE;
         Format b32 = Format.BinaryFormat.BINARY32;
         OutOfRangeException e = assertThrows(OutOfRangeException.class,
                 () -> rule(h, 100, null, null, b32, RoundingMode.NEAREST_EVEN, false, "node", "weight"));
