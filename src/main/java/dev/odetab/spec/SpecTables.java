@@ -12,6 +12,7 @@ import dev.odetab.tables.Column;
 import dev.odetab.tables.Grid;
 import dev.odetab.tables.TableDef;
 import dev.odetab.tables.TableKind;
+import dev.odetab.tables.values.TaylorEvaluator;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -255,17 +256,13 @@ final class SpecTables {
         List<Column> r = new ArrayList<>();
         for (Column c : cols) {
             if (c.taylor()) {
-                for (int k = 0; k < terms; k++) {
-                    r.add(Column.taylor(k));
-                }
+                r.addAll(TaylorEvaluator.coefficientColumns(terms));
             } else {
                 r.add(c);
             }
         }
         if (r.stream().noneMatch(Column::taylor)) {
-            for (int k = 0; k < terms; k++) {
-                r.add(Column.taylor(k));
-            }
+            r.addAll(TaylorEvaluator.coefficientColumns(terms));
         }
         return r;
     }

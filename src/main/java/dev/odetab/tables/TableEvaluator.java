@@ -4,6 +4,7 @@ import dev.odetab.base.ExprException;
 import dev.odetab.base.Progress;
 import dev.odetab.series.PrecisionCapException;
 import dev.odetab.tables.quadrature.GaussRule;
+import dev.odetab.tables.values.TaylorEvaluator;
 import dev.odetab.tables.values.ValuesEvaluator;
 import dev.odetab.tables.zeros.ZeroFinder;
 import java.util.concurrent.ExecutionException;
@@ -12,7 +13,7 @@ import java.util.concurrent.Future;
 
 /**
  * Evaluation of a table of any kind: each kind goes to its evaluator ({@link TableKind#evaluate}):
- * values and taylor tables to {@link ValuesEvaluator}, zeros tables to {@link ZeroFinder},
+ * values tables to {@link ValuesEvaluator}, taylor tables to {@link TaylorEvaluator}, zeros tables to {@link ZeroFinder},
  * quadrature tables to {@link GaussRule}.
  */
 public final class TableEvaluator {
@@ -51,7 +52,7 @@ public final class TableEvaluator {
 
             @Override
             public TableResult taylor(TableDef table, TableKind.Taylor kind) throws ExprException, PrecisionCapException, OutOfRangeException {
-                return ValuesEvaluator.evaluate(table, progress, pool);
+                return TaylorEvaluator.evaluate(table, kind, progress, pool);
             }
 
             @Override

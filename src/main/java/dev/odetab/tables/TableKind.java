@@ -8,8 +8,9 @@ import java.util.Optional;
 
 /**
  * What a table is: the spec's {@code kind}, with what each kind needs to find its rows. One record
- * per kind; each is evaluated by its own evaluator in a sub-package of {@code tables} (values and
- * taylor tables by {@code values.ValuesEvaluator}, zeros by {@code zeros.ZeroFinder}, quadrature by
+ * per kind; each is evaluated by its own evaluator in a sub-package of {@code tables} (values
+ * tables by {@code values.ValuesEvaluator}, taylor tables by {@code values.TaylorEvaluator}, which
+ * shares its chunk machinery, zeros by {@code zeros.ZeroFinder}, quadrature by
  * {@code quadrature.GaussRule}), reached through {@link #evaluate}: a new kind is a new record
  * here, a new method of {@link Evaluators} (so the compiler lists the dispatch that must handle
  * it), its evaluator and its spec section.

@@ -1,10 +1,12 @@
 package dev.odetab.tables;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.odetab.numeric.Rational;
 import dev.odetab.spec.SpecFile;
+import dev.odetab.tables.values.TaylorEvaluator;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -85,10 +87,17 @@ class TableKindTest {
                 assertEquals(rows[i], r.rows().size(), tables.get(i).name());
             }
         }
-        try (TableResult taylor = TableEvaluator.evaluate(tables.get(1))) {
+        TableDef t = tables.get(1);
+        try (TableResult taylor = TableEvaluator.evaluate(t)) {
             // c_1 = P_3'(1/2) = (15/4 − 3)/2 = 3/8
             assertEquals(Rational.of(3, 8), taylor.rows().get(0).entries().get(2).value());
         }
+        // the taylor kind reaches TaylorEvaluator, whose rows' shape is the kind's: columns taylor0 … taylor2
+        assertEquals(TaylorEvaluator.coefficientColumns(3), t.columns().subList(1, 4));
+        TableDef mismatched = new TableDef(t.name(), t.functionName(), t.function(), new TableKind.Taylor(t.grid(), 4), t.columns(),
+                t.target(), t.capBits(), t.outputs());
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> TableEvaluator.evaluate(mismatched));
+        assertTrue(e.getMessage().contains("a taylor table of 4 terms"), e.getMessage());
         assertTrue(tables.get(2).kind().givenPoints().isEmpty() && tables.get(3).kind().givenPoints().isEmpty(),
                 "zeros and nodes are found, not given");
         assertEquals(5, tables.get(0).kind().rowsBeforeEvaluation());

@@ -39,7 +39,9 @@ import java.util.ArrayDeque;
 import java.util.Deque;
 
 /**
- * Evaluation of a values table: every entry correctly rounded from a proven enclosure.
+ * Evaluation of a values table: every entry correctly rounded from a proven enclosure. The chunk
+ * machinery here (chunks, exact path, fast tier, precision loop) is shared with
+ * {@link TaylorEvaluator}: the two kinds differ only in their rows' shape ({@link RowShape}).
  *
  * <p>Trust level: Rigorous. Polynomial solutions take the exact path (exact rational values,
  * rounded once, so exactly representable values and exact rounding midpoints come out right,
@@ -53,6 +55,32 @@ public final class ValuesEvaluator {
     }
 
     /**
+     * What a row's entry is for a column that is not the point, from the derivative y^(k)(x) of
+     * the column's order k: the derivative itself (values tables, {@link #DERIVATIVES}) or the
+     * Taylor coefficient y^(k)(x)/k! ({@link TaylorEvaluator}).
+     */
+    interface RowShape {
+        /** Exact: the entry's value from the exact derivative y^(k)(x), k = {@code col.order()}. */
+        Rational exact(Column col, Rational derivative);
+
+        /** Rigorous: a ball containing the entry's value from a ball containing y^(k)(x). */
+        Ball enclose(Column col, Ball derivative, int precBits);
+    }
+
+    /** The rows of a values table: y, y', … y^(9) as they are. */
+    private static final RowShape DERIVATIVES = new RowShape() {
+        @Override
+        public Rational exact(Column col, Rational derivative) {
+            return derivative;
+        }
+
+        @Override
+        public Ball enclose(Column col, Ball derivative, int precBits) {
+            return derivative;
+        }
+    };
+
+    /**
      * Rigorous: every entry of a values table (see the class comment for how it is decided), with
      * the chunks of the grid evaluated on {@code pool} (null: in the calling thread) and progress
      * reported as rows are decided. The chunks are fixed by the table alone ({@link #chunkSize}),
@@ -62,6 +90,12 @@ public final class ValuesEvaluator {
      * @throws OutOfRangeException when a fixed-point entry is out of range and the policy is "error"
      */
     public static TableResult evaluate(TableDef t, Progress progress, ExecutorService pool)
+            throws ExprException, PrecisionCapException, OutOfRangeException {
+        return evaluate(t, DERIVATIVES, progress, pool);
+    }
+
+    /** As {@link #evaluate(TableDef, Progress, ExecutorService)}, each entry of the rows' {@code shape}. */
+    static TableResult evaluate(TableDef t, RowShape shape, Progress progress, ExecutorService pool)
             throws ExprException, PrecisionCapException, OutOfRangeException {
         int n = t.grid().size();
         progress.start(t.name(), n);
@@ -97,7 +131,7 @@ public final class ValuesEvaluator {
                     int s = next * size;
                     int e = Math.min(n, s + size);
                     CompletableFuture<Jet> start = startList == null ? null : startList.get(next);
-                    Callable<Chunk> task = () -> chunk(t, s, e, start == null ? null : TableEvaluator.await(start));
+                    Callable<Chunk> task = () -> chunk(t, shape, s, e, start == null ? null : TableEvaluator.await(start));
                     window.add(pool == null || chunks == 1 ? completed(task) : pool.submit(task));
                     next++;
                 }
@@ -157,7 +191,7 @@ public final class ValuesEvaluator {
      * ({@link FastTier}) from the chunk's start when there is one; then BigDecimal walks at doubling precision for the
      * rows still undecided, up to the cap ({@link PrecisionLoop#runBatch}).
      */
-    private static Chunk chunk(TableDef t, int s, int e, Jet start) throws ExprException, PrecisionCapException, OutOfRangeException {
+    private static Chunk chunk(TableDef t, RowShape shape, int s, int e, Jet start) throws ExprException, PrecisionCapException, OutOfRangeException {
         int len = e - s;
         List<Column> cols = t.columns();
         Entry[][] entries = new Entry[len][];
@@ -176,10 +210,7 @@ public final class ValuesEvaluator {
                 entries[i - s] = new Entry[cols.size()];
                 for (int c = 0; c < cols.size(); c++) {
                     Column col = cols.get(c);
-                    Rational v = col.isPoint() ? x : derivatives.get(col.order()).evaluate(x);
-                    if (col.taylor()) {
-                        v = v.divide(factorial(col.order()));
-                    }
+                    Rational v = col.isPoint() ? x : shape.exact(col, derivatives.get(col.order()).evaluate(x));
                     entries[i - s][c] = checked(t, x, col, Rounding.round(v, t.target()));
                 }
             } else {
@@ -195,7 +226,7 @@ public final class ValuesEvaluator {
         Stats stats = new Stats(maxRel, maxPrec);
         if (!pending.isEmpty()) {
             PrecisionLoop.<Integer, ExprException, OutOfRangeException>runBatch(pending,
-                    (undecided, prec) -> decide(t, s, undecided, poly, entries, stats, prec),
+                    (undecided, prec) -> decide(t, shape, s, undecided, poly, entries, stats, prec),
                     PrecisionLoop.chooseStartBits(t.format()), t.capBits(), still -> undecidedMessage(t, still));
         }
         TableResult.Row[] rows = new TableResult.Row[len];
@@ -221,7 +252,7 @@ public final class ValuesEvaluator {
      * table's start; {@code entries} from the chunk's start {@code s}): walks to their points at
      * {@code prec}, keeps the rows whose every entry is decided and returns the others.
      */
-    private static List<Integer> decide(TableDef t, int s, List<Integer> pending, Optional<Poly> poly, Entry[][] entries,
+    private static List<Integer> decide(TableDef t, RowShape shape, int s, List<Integer> pending, Optional<Poly> poly, Entry[][] entries,
             Stats stats, int prec) throws ExprException, OutOfRangeException {
         List<Column> cols = t.columns();
         Grid grid = t.grid();
@@ -255,7 +286,7 @@ public final class ValuesEvaluator {
                     if (derivs == null) {
                         derivs = derivatives(t.function(), pts.get(k), jet, maxOrder(cols), prec);
                     }
-                    b = col.taylor() ? derivs[col.order()].divide(factorial(col.order()), prec) : derivs[col.order()];
+                    b = shape.enclose(col, derivs[col.order()], prec);
                 }
                 Optional<Entry> en = Rounding.decide(b, t.target());
                 if (en.isEmpty()) {
@@ -288,14 +319,6 @@ public final class ValuesEvaluator {
     private static Jet nodeJet(FunctionDef f, Rational center, Jet atCenter, Ball node, int precBits) {
         Ball t = node.subtract(Ball.of(center, precBits + 20), precBits + 20);
         return Continuation.stepOver(f.equation(), center, atCenter, t, precBits);
-    }
-
-    private static Rational factorial(int k) {
-        Rational f = Rational.ONE;
-        for (int i = 2; i <= k; i++) {
-            f = f.multiply(i);
-        }
-        return f;
     }
 
     private static int maxOrder(List<Column> cols) {
