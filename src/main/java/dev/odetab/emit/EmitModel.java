@@ -6,6 +6,7 @@ import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.Rounding;
 import dev.odetab.numeric.Target;
 import dev.odetab.tables.Column;
+import dev.odetab.tables.Identifiers;
 import dev.odetab.tables.Grid;
 import dev.odetab.tables.TableKind;
 import dev.odetab.base.Progress;
@@ -38,7 +39,7 @@ final class EmitModel {
         table.put("name", t.name());
         table.put("identifier", t.name().toLowerCase(Locale.ROOT));
         table.put("macro", t.name().toUpperCase(Locale.ROOT));
-        table.put("className", className(t.name()));
+        table.put("className", Identifiers.className(t.name()));
         table.put("javaPackage", javaPackage);
         table.put("length", Integer.toString(result.rows().size()));
         table.put("format", t.format().name());
@@ -61,7 +62,7 @@ final class EmitModel {
                 Map<String, Object> cm = new LinkedHashMap<>();
                 cm.put("name", name);
                 cm.put("macro", name.toUpperCase(Locale.ROOT));
-                cm.put("accessor", accessor(name));
+                cm.put("accessor", Identifiers.accessor(name));
                 cm.put("cType", part.cType());
                 cm.put("javaType", part.javaType());
                 cm.put("description", col.name() + ": " + part.description() + ", rounded " + t.rounding().spelling());
@@ -96,26 +97,5 @@ final class EmitModel {
         m.put("binary64", e.hexLiteral());
         m.put("isExact", r.equals(e.value()));
         return m;
-    }
-
-    /** {@code ai_fine} → {@code AiFine}. */
-    static String className(String name) {
-        StringBuilder sb = new StringBuilder();
-        boolean up = true;
-        for (char ch : name.toCharArray()) {
-            if (ch == '_') {
-                up = true;
-            } else {
-                sb.append(up ? Character.toUpperCase(ch) : ch);
-                up = false;
-            }
-        }
-        return sb.toString();
-    }
-
-    /** {@code value_hi} → {@code valueHi}. */
-    static String accessor(String name) {
-        String c = className(name);
-        return Character.toLowerCase(c.charAt(0)) + c.substring(1);
     }
 }

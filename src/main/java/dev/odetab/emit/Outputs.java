@@ -3,6 +3,7 @@ package dev.odetab.emit;
 import dev.odetab.base.Json;
 
 import dev.odetab.base.Progress;
+import dev.odetab.tables.Identifiers;
 import dev.odetab.tables.TableDef;
 import dev.odetab.tables.TableResult;
 import java.io.BufferedOutputStream;
@@ -152,7 +153,7 @@ public final class Outputs implements AutoCloseable {
         return switch (output) {
             case "csv" -> List.of(table + ".csv");
             case "c" -> List.of(table.toLowerCase(Locale.ROOT) + ".h", table.toLowerCase(Locale.ROOT) + ".c");
-            case "java" -> List.of(EmitModel.className(table) + ".java");
+            case "java" -> List.of(Identifiers.className(table) + ".java");
             default -> List.of(userOutputName(table, Path.of(output)));
         };
     }
