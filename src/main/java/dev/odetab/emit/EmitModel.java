@@ -5,8 +5,8 @@ import dev.odetab.numeric.Format;
 import dev.odetab.numeric.Rational;
 import dev.odetab.numeric.Rounding;
 import dev.odetab.numeric.Target;
-import dev.odetab.tables.Column;
 import dev.odetab.tables.Identifiers;
+import dev.odetab.tables.Column;
 import dev.odetab.tables.Grid;
 import dev.odetab.tables.TableKind;
 import dev.odetab.base.Progress;
@@ -19,7 +19,8 @@ import java.util.Map;
 
 /**
  * The data model every template receives (documented in DEVELOPERS.md): plain maps, lists and
- * strings only, every literal already formatted.
+ * strings only, every literal already formatted. Every text is comment-safe ({@link SourceText}),
+ * every name a valid C and Java identifier (the spec refuses others).
  */
 final class EmitModel {
     private EmitModel() {
@@ -29,11 +30,11 @@ final class EmitModel {
     static Map<String, Object> of(TableResult result, Provenance provenance, String specTitle, String javaPackage, Progress progress) {
         var t = result.table();
         Map<String, Object> m = new LinkedHashMap<>();
-        m.put("tool", Map.of("version", provenance.toolVersion()));
+        m.put("tool", Map.of("version", SourceText.comment(provenance.toolVersion())));
         Map<String, Object> spec = new LinkedHashMap<>();
-        spec.put("path", provenance.specPath());
+        spec.put("path", SourceText.comment(provenance.specPath()));
         spec.put("sha256", provenance.specSha256());
-        spec.put("title", specTitle);
+        spec.put("title", SourceText.comment(specTitle));
         m.put("spec", spec);
         Map<String, Object> table = new LinkedHashMap<>();
         table.put("name", t.name());
@@ -44,9 +45,9 @@ final class EmitModel {
         table.put("length", Integer.toString(result.rows().size()));
         table.put("format", t.format().name());
         table.put("rounding", t.rounding().spelling());
-        table.put("function", t.functionName());
+        table.put("function", SourceText.comment(t.functionName()));
         m.put("table", table);
-        m.put("provenance", provenance.lines());
+        m.put("provenance", provenance.lines().stream().map(SourceText::comment).toList());
         m.put("grid", grid(t.kind()));
         List<Map<String, Object>> columns = new ArrayList<>();
         for (int c = 0; c < t.columns().size(); c++) {
@@ -65,7 +66,7 @@ final class EmitModel {
                 cm.put("accessor", Identifiers.accessor(name));
                 cm.put("cType", part.cType());
                 cm.put("javaType", part.javaType());
-                cm.put("description", col.name() + ": " + part.description() + ", rounded " + t.rounding().spelling());
+                cm.put("description", SourceText.comment(col.name() + ": " + part.description() + ", rounded " + t.rounding().spelling()));
                 cm.put("c", cLits);
                 cm.put("java", javaLits);
                 columns.add(cm);
@@ -85,7 +86,7 @@ final class EmitModel {
         } else {
             m.put("uniform", false);
         }
-        m.put("description", kind.describe());
+        m.put("description", SourceText.comment(kind.describe()));
         return m;
     }
 
@@ -93,7 +94,7 @@ final class EmitModel {
     private static Map<String, Object> constant(Rational r) {
         Entry e = Rounding.round(r, Target.nearest(Format.BinaryFormat.BINARY64));
         Map<String, Object> m = new LinkedHashMap<>();
-        m.put("exact", r.toDecimalOrFraction());
+        m.put("exact", SourceText.comment(r.toDecimalOrFraction()));
         m.put("binary64", e.hexLiteral());
         m.put("isExact", r.equals(e.value()));
         return m;

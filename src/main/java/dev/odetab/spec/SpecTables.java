@@ -10,6 +10,7 @@ import dev.odetab.ode.FunctionDef;
 import dev.odetab.ode.family.Catalog;
 import dev.odetab.tables.Column;
 import dev.odetab.tables.Grid;
+import dev.odetab.tables.Identifiers;
 import dev.odetab.tables.TableDef;
 import dev.odetab.tables.TableKind;
 import dev.odetab.tables.values.TaylorEvaluator;
@@ -67,6 +68,10 @@ final class SpecTables {
         List<String> base = List.of("tables", name);
         if (!name.matches("[A-Za-z][A-Za-z0-9_]*")) {
             throw spec.error(base, "table name '" + name + "' must start with a letter and hold only letters, digits and '_' (it names files and identifiers)");
+        }
+        String reserved = Identifiers.problem(name);
+        if (reserved != null) {
+            throw spec.error(base, reserved);
         }
         TomlTable t = root.getTable(base);
         if (t == null) {

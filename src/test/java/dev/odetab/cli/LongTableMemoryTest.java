@@ -65,7 +65,7 @@ class LongTableMemoryTest {
         String to = BigDecimal.ONE.subtract(stepExact).toPlainString();
         Path spec = tmp.resolve("long.toml");
         Files.writeString(spec, String.join("\n", "title = \"Quillmere Instruments: a long calibration table\"",
-                "[functions.p2]", "family = \"legendre-p\"", "n = 2", "[tables.long]", "function = \"p2\"",
+                "[functions.p2]", "family = \"legendre-p\"", "n = 2", "[tables.calibration]", "function = \"p2\"",
                 "grid = { from = \"0\", to = \"" + to + "\", step = \"" + step + "\" }",
                 "columns = [\"" + String.join("\", \"", columns) + "\"]", "format = \"binary32\"", "outputs = " + outputs, ""));
         Path out = tmp.resolve("out");
@@ -85,7 +85,7 @@ class LongTableMemoryTest {
             assertEquals(List.of(), left.toList(), "temporary files left in java.io.tmpdir");
         }
         checkManifest(out);
-        checkCsv(out.resolve("long.csv"), rows, stepExact, columns);
+        checkCsv(out.resolve("calibration.csv"), rows, stepExact, columns);
     }
 
     /** Every file of the folder is listed in manifest.json with its SHA-256 (Java SE MessageDigest), and nothing else is there. */

@@ -92,7 +92,7 @@ class CCompileTest {
         return c.append("    return 0;\n}\n").toString();
     }
 
-    private static void requireGcc() {
+    static void requireGcc() {
         try {
             Run r = run(List.of("gcc", "--version"));
             if (r.code() != 0) {
@@ -103,10 +103,10 @@ class CCompileTest {
         }
     }
 
-    private record Run(int code, String output) {
+    record Run(int code, String output) {
     }
 
-    private static Run run(List<String> command) throws IOException {
+    static Run run(List<String> command) throws IOException {
         Process p = new ProcessBuilder(command).redirectErrorStream(true).start();
         try {
             String output = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
