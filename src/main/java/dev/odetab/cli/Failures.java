@@ -29,6 +29,24 @@ final class Failures {
         return Main.NUMERICAL_LIMIT;
     }
 
+    /**
+     * Prints the message of a failure that no command maps (a bug, or the JVM out of memory) and
+     * returns exit code 70, the one mapping of the unexpected; {@code ODETAB_DEBUG} adds the
+     * stack trace.
+     */
+    static int internalError(Throwable e, PrintWriter err) {
+        if (e instanceof OutOfMemoryError) {
+            err.println("odetab: out of memory (" + (Runtime.getRuntime().maxMemory() >> 20)
+                    + " MiB of heap); give Java more with JDK_JAVA_OPTIONS=-Xmx2g, or build a smaller table");
+        } else {
+            err.println("odetab: internal error: " + e);
+        }
+        if (System.getenv("ODETAB_DEBUG") != null) {
+            e.printStackTrace(err);
+        }
+        return Main.INTERNAL_ERROR;
+    }
+
     /** The --verbose line for one point. */
     static String work(String point, boolean exact, int precBits, int attempts, int steps, int terms) {
         return "odetab: x = " + point + ": " + (exact ? "exact (a polynomial solution, evaluated in rational arithmetic)"

@@ -7,9 +7,11 @@ import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
 /**
- * The {@code odetab} command line. Exit codes (DESIGN.md): 0 success; 1 a check or an audit
- * found a difference; 2 bad input; 3 a numerical limit was reached; 70 an internal error
- * (a bug: please report it with the command that caused it).
+ * The {@code odetab} command line. Exit codes (DESIGN.md, README): 0 success; 1 a check or an
+ * audit found a difference; 2 bad input; 3 a numerical limit was reached; 70 an internal error
+ * (a bug: please report it with the command that caused it; also the JVM running out of memory).
+ * These are the only codes {@link #run} returns: every failure that no command maps is mapped to
+ * 70 by {@link Failures#internalError}.
  */
 @Command(name = "odetab", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Correctly rounded tables of solutions of second-order linear equations, with proven error bounds.",
@@ -50,15 +52,16 @@ public final class Main implements Runnable {
             err.println("Try 'odetab " + (sub.getParent() == null ? "" : sub.getCommandName() + " ") + "--help'.");
             return BAD_INPUT;
         });
-        cl.setExecutionExceptionHandler((ex, c, parsed) -> {
-            err.println("odetab: internal error: " + ex);
-            if (System.getenv("ODETAB_DEBUG") != null) {
-                ex.printStackTrace(err);
-            }
-            return INTERNAL_ERROR;
-        });
+        cl.setExecutionExceptionHandler((ex, c, parsed) -> Failures.internalError(ex, err));
         CommandContext.set(List.of(args));
-        int code = cl.execute(args);
+        int code;
+        try {
+            code = cl.execute(args);
+        } catch (Error | RuntimeException e) {
+            // what escapes picocli's handlers (an Error such as StackOverflowError or
+            // OutOfMemoryError) is mapped here, so that a crash never exits with 1
+            code = Failures.internalError(e, err);
+        }
         out.flush();
         err.flush();
         return code;
