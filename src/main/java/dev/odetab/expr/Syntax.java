@@ -4,6 +4,7 @@ import dev.odetab.base.ExprException;
 
 import dev.odetab.numeric.Rational;
 import java.math.BigDecimal;
+import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -26,6 +27,11 @@ import java.util.TreeSet;
  * factor that is a bare number (optionally signed, no '^') followed by a name or '('
  * ({@code 2x}, {@code 3(x+1)}, {@code 2y'}, {@code 2pi}, {@code 2sqrt(3)}), and a factor that
  * ends with ')' (a parenthesized group or a call, no '^') followed by '(' ({@code (x-1)(x+1)}).
+ *
+ * <p>Limits (README, "Limits"): a tree at most {@link #MAX_DEPTH} levels deep, counting every
+ * parenthesis, call, sign and power, and every operand of a chain of '+', '-', '*' and '/' (the
+ * tree of {@code a + b + c} is {@code (a + b) + c}); the parser, and every walk of the tree after
+ * it, recurses once per level, so deeper input would exhaust the stack.
  */
 final class Syntax {
     /** Which variables a text may use. */
@@ -121,6 +127,8 @@ final class Syntax {
     }
 
     private static final int MAX_DECIMAL_EXPONENT = 10_000;
+    /** The deepest syntax tree accepted (see the class comment). */
+    static final int MAX_DEPTH = 256;
 
     private final String text;
     private final Context context;
@@ -128,6 +136,7 @@ final class Syntax {
     private final List<Token> tokens;
     private int pos;
     private Juxtaposable lastFactor = Juxtaposable.NONE;
+    private int nesting;
 
     private Syntax(String text, Context context, Map<String, Rational> params) throws ExprException {
         this.text = text;
@@ -150,6 +159,7 @@ final class Syntax {
         }
         Node n = s.sum("at the start of the text");
         s.expectEnd();
+        checkDepth(n);
         return n;
     }
 
@@ -181,7 +191,46 @@ final class Syntax {
             throw new ExprException(end.column(), "a second '=': an equation has exactly one '='");
         }
         s.expectEnd();
+        checkDepth(left);
+        checkDepth(right);
         return new EquationNode(left, right, eq.column());
+    }
+
+    /** Refuses a tree deeper than {@link #MAX_DEPTH}, at the column of its deepest node; iterative, so any depth is measured. */
+    private static void checkDepth(Node root) throws ExprException {
+        ArrayDeque<Node> nodes = new ArrayDeque<>();
+        ArrayDeque<Integer> depths = new ArrayDeque<>();
+        nodes.push(root);
+        depths.push(1);
+        while (!nodes.isEmpty()) {
+            Node n = nodes.pop();
+            int d = depths.pop();
+            if (d > MAX_DEPTH) {
+                throw tooDeep(n.column());
+            }
+            for (Node child : children(n)) {
+                nodes.push(child);
+                depths.push(d + 1);
+            }
+        }
+    }
+
+    private static List<Node> children(Node n) {
+        if (n instanceof Neg m) {
+            return List.of(m.operand());
+        } else if (n instanceof Bin m) {
+            return List.of(m.left(), m.right());
+        } else if (n instanceof Call m) {
+            return List.of(m.argument());
+        } else if (n instanceof Group m) {
+            return List.of(m.inner());
+        }
+        return List.of();
+    }
+
+    private static ExprException tooDeep(int column) {
+        return new ExprException(column, "the expression nests deeper than " + MAX_DEPTH
+                + " levels (each parenthesis, call, sign and power is a level, and each operand of a sum or product)");
     }
 
     /** True when the name y'' occurs anywhere in the tree. */
@@ -253,6 +302,17 @@ final class Syntax {
 
     private Node factor(String where) throws ExprException {
         Token t = peek();
+        if (++nesting > MAX_DEPTH) {
+            throw tooDeep(t.column());
+        }
+        try {
+            return signedFactor(where, t);
+        } finally {
+            nesting--;
+        }
+    }
+
+    private Node signedFactor(String where, Token t) throws ExprException {
         if (t.is('-') || t.is('+')) {
             pos++;
             Node operand = factor("after '" + t.text + "'");

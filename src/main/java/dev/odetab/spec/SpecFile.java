@@ -15,7 +15,6 @@ import dev.odetab.ode.family.ParameterException;
 import dev.odetab.tables.TableDef;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import javax.lang.model.SourceVersion;
@@ -75,13 +74,14 @@ public final class SpecFile {
         String text;
         byte[] bytes;
         try {
-            bytes = Files.readAllBytes(path);
-            text = new String(bytes, StandardCharsets.UTF_8);
+            bytes = TomlLimits.read(path, display);
+            text = TomlLimits.withoutBom(new String(bytes, StandardCharsets.UTF_8));
         } catch (NoSuchFileException e) {
             throw new InputError(display, "no such spec file");
         } catch (IOException e) {
             throw new InputError(display, "cannot read the spec file: " + e.getMessage());
         }
+        TomlLimits.checkNesting(text, display);
         TomlParseResult toml = Toml.parse(text);
         if (toml.hasErrors()) {
             TomlParseError first = toml.errors().get(0);

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.odetab.cli.CliRunner;
+import dev.odetab.cli.FolderHash;
 import java.lang.reflect.Field;
 import java.lang.reflect.Method;
 import java.net.URL;
@@ -13,12 +14,9 @@ import java.net.URLClassLoader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.security.MessageDigest;
 import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
-import java.util.stream.Stream;
 import javax.tools.DiagnosticCollector;
 import javax.tools.JavaCompiler;
 import javax.tools.JavaFileObject;
@@ -101,7 +99,7 @@ class HostileSourceTest {
     void reservedTableNamesAreRefusedAtTheSpecLine(@TempDir Path tmp) throws Exception {
         Path out = Files.createDirectories(tmp.resolve("out"));
         Files.writeString(out.resolve("keep.c"), "/* an older output */\n");
-        String before = hash(out);
+        String before = FolderHash.of(out);
         for (String name : List.of("int", "Class", "TRUE", "null", "String", "namespace")) {
             Path spec = tmp.resolve(name + ".toml");
             Files.writeString(spec, String.join("\n", "# a table named after a reserved word", "[tables." + name + "]",
@@ -109,20 +107,7 @@ class HostileSourceTest {
             CliRunner.Result r = CliRunner.run("build", spec.toString(), "--out", out.toString(), "--quiet");
             assertEquals(2, r.code(), name + ": " + r.err());
             assertTrue(r.err().startsWith("odetab: " + spec + ":2:1: table name '" + name + "' would make the "), r.err());
-            assertEquals(before, hash(out), name + ": the output folder changed");
+            assertEquals(before, FolderHash.of(out), name + ": the output folder changed");
         }
-    }
-
-    private static String hash(Path dir) throws Exception {
-        MessageDigest md = MessageDigest.getInstance("SHA-256");
-        try (Stream<Path> files = Files.walk(dir)) {
-            for (Path p : files.sorted().toList()) {
-                md.update(dir.relativize(p).toString().getBytes(StandardCharsets.UTF_8));
-                if (Files.isRegularFile(p)) {
-                    md.update(Files.readAllBytes(p));
-                }
-            }
-        }
-        return HexFormat.of().formatHex(md.digest());
     }
 }
