@@ -46,6 +46,9 @@ public final class Main implements Runnable {
         cl.setOut(out);
         cl.setErr(err);
         cl.setUnmatchedOptionsAllowedAsOptionParameters(false);
+        // points may be negative rationals (-1/3) without '--'; an unknown option then reaches
+        // Points.parse, which names it
+        cl.getSubcommands().get("eval").setUnmatchedOptionsArePositionalParams(true);
         cl.setParameterExceptionHandler((ex, a) -> {
             err.println("odetab: " + ex.getMessage());
             CommandLine sub = ex.getCommandLine();

@@ -80,6 +80,25 @@ class BadInputTest {
     }
 
     @Test
+    void anUnknownOptionAmongThePointsIsNamed() {
+        expect("argument 4 '--digts', column 1: unknown option '--digts' (see odetab eval --help; a point is a number such as -1/3)",
+                "eval", "airy-ai", "0", "--digts", "3");
+    }
+
+    /** Negative rationals and hex floats are points without '--', as the README writes them (issue 17, item 8). */
+    @Test
+    void negativePointsNeedNoDoubleDash() {
+        CliRunner.Result plain = CliRunner.run("eval", "airy-ai", "0", "-1/3", "-0x1p-2", "-7.25", "--digits", "12");
+        assertEquals(0, plain.code(), plain.err());
+        CliRunner.Result dashed = CliRunner.run("eval", "--digits", "12", "airy-ai", "--", "0", "-1/3", "-0x1p-2", "-7.25");
+        assertEquals(0, dashed.code(), dashed.err());
+        assertEquals(dashed.out(), plain.out());
+        assertEquals(4, plain.out().lines().count(), plain.out());
+        CliRunner.Result first = CliRunner.run("eval", "airy-ai", "-1/3", "--format", "binary64");
+        assertEquals(0, first.code(), first.err());
+    }
+
+    @Test
     void precisionRequestAboveTheCap() {
         expect("argument 4 '3000', column 1: --digits 3000 needs at least 9999 bits of working precision, "
                 + "above the precision cap of 4096 bits (raise it with --precision-cap-bits)",
