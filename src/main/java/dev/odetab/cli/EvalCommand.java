@@ -108,11 +108,21 @@ final class EvalCommand implements Callable<Integer> {
         } catch (InputError | ExprException | SingularCrossingException e) {
             return Failures.badInput(e, function, err);
         } catch (PointLimit e) {
-            return Failures.numericalLimit(function + " at x = " + e.point + ": ", (PrecisionCapException) e.getCause(),
-                    "; nothing is printed for this point (raise --precision-cap-bits)", err);
+            PrecisionCapException cap = (PrecisionCapException) e.getCause();
+            return Failures.numericalLimit(function + " at x = " + e.point + ": ", cap,
+                    "; nothing is printed for this point (" + capAdvice(cap) + ")", err);
         } finally {
             out.flush();
         }
+    }
+
+    /** What may still decide a point the cap left undecided. */
+    private static String capAdvice(PrecisionCapException cap) {
+        if (cap.lastEnclosure() != null && cap.lastEnclosure().containsZero()) {
+            return "the enclosure still contains 0: if the value is exactly 0, no precision decides its sign under a directed"
+                    + " rounding (use nearest-even); otherwise raise --precision-cap-bits, at most " + MAX_CAP_BITS;
+        }
+        return "raise --precision-cap-bits, at most " + MAX_CAP_BITS;
     }
 
     private Integer printEntries(FunctionDef f, List<Rational> xs, PrintWriter out, PrintWriter err)

@@ -21,4 +21,16 @@ class ExitCodesTest {
             assertTrue(err.toString().startsWith("odetab: "), err.toString());
         }
     }
+
+    /** The exit-3 message is one short line with the advice that applies (issue 17, item 9). */
+    @Test
+    void theCapMessageIsShortAndAdvises() {
+        // ψ_1 is a multiple of x e^(-x²/2), whose derivative (1 - x²) e^(-x²/2) is exactly 0 at x = 1; it is no polynomial
+        CliRunner.Result r = CliRunner.run("eval", "hermite-function", "-p", "n=1", "1", "--derivative", "--format", "binary64",
+                "--rounding", "toward-negative", "--precision-cap-bits", "512");
+        assertEquals(Main.NUMERICAL_LIMIT, r.code(), r.err());
+        assertEquals(1, r.err().lines().count(), r.err());
+        assertTrue(r.err().length() < 400, r.err());
+        assertTrue(r.err().contains("the enclosure still contains 0"), r.err());
+    }
 }
