@@ -22,8 +22,10 @@ import java.util.Map;
  * integers (a {@code …_decoded} column holds their exact values). When an {@code x} column is
  * present each entry maps to its x, which must be a point of the grid (exactly, or after
  * rounding the grid point into the format, since odetab writes inexact points rounded);
- * otherwise entries map to grid points by position. Empty, NaN and unreadable fields are bad
- * input located as {@code file:line:column}.
+ * otherwise entries map to grid points by position; with both {@code x} and {@code x_hex} the
+ * two must name the same grid point. Empty, NaN and unreadable fields, a duplicate column name
+ * and a row with more or fewer fields than the header are bad input located as
+ * {@code file:line:column}.
  */
 final class CsvReader {
     private CsvReader() {
@@ -52,6 +54,13 @@ final class CsvReader {
             throw new InputError(display, "empty CSV file (expected a header row)");
         }
         List<String> header = Arrays.stream(rows.get(0)).map(h -> h == null ? "" : h.strip()).toList();
+        String headerLine = text.split("\r\n|\r|\n", 2)[0];
+        for (int c = 0; c < header.size(); c++) {
+            if (header.indexOf(header.get(c)) != c) {
+                throw new InputError(display + ":" + lines.get(0) + ":" + column(headerLine, c),
+                        "the column '" + header.get(c) + "' appears twice in the header");
+            }
+        }
         int valueCol = chooseColumn(display, header, column, format);
         boolean hex = header.get(valueCol).endsWith("_hex");
         boolean decoded = header.get(valueCol).endsWith("_decoded");
@@ -72,22 +81,22 @@ final class CsvReader {
         for (int r = 1; r < rows.size(); r++) {
             int line = lines.get(r);
             String lineText = line >= 1 && line <= raw.length ? raw[line - 1] : "";
+            if (rows.get(r).length != header.size()) {
+                int c = Math.min(rows.get(r).length, header.size());
+                throw new InputError(where(display, line, lineText, c), "this row has " + rows.get(r).length
+                        + " field(s), the header " + header.size());
+            }
             items.add(field(display, rows.get(r), valueCol, line, lineText, format, hex || decoded));
             if (xs != null) {
                 int c = xHex >= 0 && format.kind() == Format.Kind.BINARY ? xHex : xCol;
                 String xText = cell(rows.get(r), c);
-                Integer index = null;
-                try {
-                    index = exactGrid.get(Rational.parse(xText));
-                } catch (NumberFormatException e) {
-                    // not a plain decimal: read it as an entry of the format below
-                }
-                if (index == null) {
-                    Entries.Item x = field(display, rows.get(r), c, line, lineText, format, c == xHex);
-                    index = x.infinite() ? null : heldGrid.get(x.value());
-                }
-                if (index == null) {
-                    throw new InputError(where(display, line, lineText, c), "x = " + xText + " is not a point of the table's grid");
+                int index = gridIndex(display, rows.get(r), c, line, lineText, format, c == xHex, exactGrid, heldGrid);
+                if (c == xHex && xCol >= 0) {
+                    int typed = gridIndex(display, rows.get(r), xCol, line, lineText, format, false, exactGrid, heldGrid);
+                    if (typed != index) {
+                        throw new InputError(where(display, line, lineText, xCol), "x = " + cell(rows.get(r), xCol)
+                                + " disagrees with x_hex = " + xText + " (grid points " + (typed + 1) + " and " + (index + 1) + ")");
+                    }
                 }
                 if (xs.contains(index)) {
                     throw new InputError(where(display, line, lineText, c), "x = " + xText + " appears twice");
@@ -96,6 +105,26 @@ final class CsvReader {
             }
         }
         return new Entries(display, header.get(valueCol), items, xs);
+    }
+
+    /** Exact: the grid index of the x in field {@code c} (an exact grid point, or one rounded into the format). */
+    private static int gridIndex(String display, String[] row, int c, int line, String lineText, Format format, boolean exact,
+            Map<Rational, Integer> exactGrid, Map<Rational, Integer> heldGrid) throws InputError {
+        String xText = cell(row, c);
+        Integer index = null;
+        try {
+            index = exactGrid.get(Rational.parse(xText));
+        } catch (NumberFormatException e) {
+            // not a plain decimal: read it as an entry of the format below
+        }
+        if (index == null) {
+            Entries.Item x = field(display, row, c, line, lineText, format, exact);
+            index = x.infinite() ? null : heldGrid.get(x.value());
+        }
+        if (index == null) {
+            throw new InputError(where(display, line, lineText, c), "x = " + xText + " is not a point of the table's grid");
+        }
+        return index;
     }
 
     /** Exact: the index of the value column ({@code NAME_hex} preferred in binary formats). */
@@ -140,7 +169,9 @@ final class CsvReader {
         if (lit == null || body.matches(".*[fFdDlLuU]$") && !body.matches("(?i)0x[0-9a-f]+")) {
             throw new InputError(where, "'" + s + "' is not a number");
         }
-        if (exact && format.kind() == Format.Kind.FIXED) {
+        if (lit.beyond() != Literal.Beyond.NO) {
+            lit = new Literal(null, format.kind() == Format.Kind.FIXED ? lit.type() : Literal.Type.TEXT, lit.beyond());
+        } else if (exact && format.kind() == Format.Kind.FIXED) {
             Format.FixedFormat f = (Format.FixedFormat) format;
             Rational k = lit.value().multiply(Rational.TWO.pow(f.fractionBits()));
             if (!k.isInteger()) {

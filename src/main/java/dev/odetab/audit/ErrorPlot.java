@@ -38,12 +38,22 @@ public final class ErrorPlot {
     private ErrorPlot() {
     }
 
-    /** Heuristic (presentation): the chart; infinite errors are drawn at ±Double.MAX_VALUE. */
+    /**
+     * Heuristic (presentation): the chart, its error axis spanning the tolerance and every finite
+     * error; infinite errors (an infinite entry, or one beyond the format's range) are drawn on
+     * the edge of the axis, on their side.
+     */
     private static JFreeChart chart(AuditResult a) {
+        double max = a.tolerance();
+        for (AuditResult.Row r : a.rows()) {
+            if (Double.isFinite(r.ulps())) {
+                max = Math.max(max, Math.abs(r.ulps()));
+            }
+        }
         XYSeries s = new XYSeries("error", false, true);
         for (AuditResult.Row r : a.rows()) {
             double u = r.ulps();
-            s.add(r.x().doubleEstimate(), Double.isFinite(u) ? u : Math.copySign(Double.MAX_VALUE, u));
+            s.add(r.x().doubleEstimate(), Double.isFinite(u) ? u : Math.copySign(1.05 * max, u));
         }
         String title = String.format(Locale.ROOT, "%s vs %s#%s (%s)", a.entries().name(), a.table().name(), a.column(),
                 a.table().format().name());
@@ -63,7 +73,6 @@ public final class ErrorPlot {
             ValueMarker m = new ValueMarker(t, new Color(0xc0, 0x30, 0x30), new BasicStroke(1.5f));
             plot.addRangeMarker(m);
         }
-        double max = Math.max(a.tolerance(), AuditReport.percentile(a, 100));
         plot.getRangeAxis().setRange(-1.1 * max, 1.1 * max);
         return chart;
     }

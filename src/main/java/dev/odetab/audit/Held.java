@@ -39,11 +39,28 @@ final class Held {
      */
     static Entries.Item of(String text, int line, int column, Literal lit, boolean negative, Format format,
             boolean arrayEntry) throws NotHeld {
+        if (lit.beyond() != Literal.Beyond.NO) {
+            return beyond(text, line, column, lit, negative, format);
+        }
         Rational v = negative ? lit.value().negate() : lit.value();
         return switch (format.kind()) {
             case FIXED -> fixed(text, line, column, lit, negative, v, (Format.FixedFormat) format);
             case BINARY -> binary(text, line, column, lit, negative, v, (Format.BinaryFormat) format, arrayEntry);
             case DOUBLE_DOUBLE, DECIMAL -> new Entries.Item(text, line, column, v, negative);
+        };
+    }
+
+    /**
+     * Exact: a literal beyond every format's range. In a binary format it is held as the
+     * compiler holds it, an infinity (overflow) or a zero of its sign (underflow), and audited
+     * as such (a finding, not an error); other formats hold no such value.
+     */
+    private static Entries.Item beyond(String text, int line, int column, Literal lit, boolean negative, Format format)
+            throws NotHeld {
+        return switch (format.kind()) {
+            case BINARY -> new Entries.Item(text, line, column, lit.beyond() == Literal.Beyond.LARGE ? null : Rational.ZERO, negative);
+            case FIXED, DOUBLE_DOUBLE, DECIMAL -> throw new NotHeld("'" + text + "' has an exponent beyond what odetab computes with (at most 10^±"
+                    + Rational.MAX_DECIMAL_EXPONENT + ") and is no value of " + format.name());
         };
     }
 

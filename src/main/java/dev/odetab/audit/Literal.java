@@ -15,10 +15,29 @@ import java.util.regex.Pattern;
  * to its type; {@link #type} says what type the compiler gives it, so that the caller can
  * apply that conversion.
  *
- * @param value the exact value of the digits (unsigned)
+ * <p>An exponent beyond {@link Rational#MAX_DECIMAL_EXPONENT} (in powers of ten, or the same
+ * range in powers of two for a hex float) is not computed with: such a literal is {@link
+ * Beyond#LARGE} (it overflows every format) or {@link Beyond#SMALL} (it underflows every
+ * format to zero) and has no value.
+ *
+ * @param value the exact value of the digits (unsigned); null when {@code beyond} is not NO
  * @param type what the compiler makes of it
+ * @param beyond whether the exponent lies beyond the range odetab computes with
  */
-record Literal(Rational value, Type type) {
+record Literal(Rational value, Type type, Beyond beyond) {
+    /** Whether a literal's magnitude lies beyond every format. */
+    enum Beyond {
+        NO, LARGE, SMALL
+    }
+
+    /** A literal within range. */
+    Literal(Rational value, Type type) {
+        this(value, type, Beyond.NO);
+    }
+
+    /** The largest binary exponent computed with: 2^MAX_BINARY_EXPONENT exceeds 10^MAX_DECIMAL_EXPONENT. */
+    private static final int MAX_BINARY_EXPONENT = 332_193;
+
     /** The type a literal has in C or Java, which decides its first rounding. */
     enum Type {
         /** An integer constant: exact. */
@@ -73,12 +92,26 @@ record Literal(Rational value, Type type) {
                 return null;
             }
             BigInteger digits = new BigInteger("0" + whole + frac, 16);
-            int exp = Integer.parseInt(m.group(3)) - 4 * frac.length();
-            return new Literal(Rational.of(digits).multiply(Rational.TWO.pow(exp)), type(m.group(4)));
+            BigInteger exp = new BigInteger(m.group(3)).subtract(BigInteger.valueOf(4L * frac.length()));
+            Type type = type(m.group(4));
+            if (digits.signum() != 0 && exp.abs().compareTo(BigInteger.valueOf(MAX_BINARY_EXPONENT)) > 0) {
+                return new Literal(null, type, exp.signum() > 0 ? Beyond.LARGE : Beyond.SMALL);
+            }
+            return new Literal(Rational.of(digits).multiply(Rational.TWO.pow(digits.signum() == 0 ? 0 : exp.intValueExact())), type);
         }
         m = DECIMAL_FLOAT.matcher(s);
         if (m.matches() && (s.contains(".") || s.toLowerCase(Locale.ROOT).contains("e") || !m.group(2).isEmpty())) {
-            return new Literal(Rational.of(new BigDecimal(m.group(1))), type(m.group(2)));
+            String number = m.group(1);
+            int e = Math.max(number.indexOf('e'), number.indexOf('E'));
+            String mantissa = e < 0 ? number : number.substring(0, e);
+            BigInteger exp = e < 0 ? BigInteger.ZERO : new BigInteger(number.substring(e + 1));
+            // beyond the bound by a margin that the mantissa's own digits cannot make up
+            BigInteger bound = BigInteger.valueOf(Rational.MAX_DECIMAL_EXPONENT + (long) mantissa.length());
+            if (mantissa.chars().anyMatch(ch -> ch >= '1' && ch <= '9') && exp.abs().compareTo(bound) > 0) {
+                return new Literal(null, type(m.group(2)), exp.signum() > 0 ? Beyond.LARGE : Beyond.SMALL);
+            }
+            BigDecimal value = exp.abs().compareTo(bound) > 0 ? BigDecimal.ZERO : new BigDecimal(number);
+            return new Literal(Rational.of(value), type(m.group(2)));
         }
         return null;
     }
