@@ -3,12 +3,15 @@ package dev.odetab.emit;
 import freemarker.cache.ClassTemplateLoader;
 import freemarker.cache.FileTemplateLoader;
 import freemarker.cache.TemplateLoader;
+import freemarker.core.InvalidReferenceException;
 import freemarker.core.TemplateClassResolver;
 import freemarker.template.Configuration;
+import freemarker.template.MalformedTemplateNameException;
 import freemarker.template.SimpleObjectWrapper;
 import freemarker.template.Template;
 import freemarker.template.TemplateException;
 import freemarker.template.TemplateExceptionHandler;
+import freemarker.template.TemplateNotFoundException;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.io.OutputStreamWriter;
@@ -94,15 +97,46 @@ final class TemplateEngine {
                     "template syntax: " + firstLine(e.getEditorMessage()));
         } catch (IOException e) {
             throw new TemplateProblem(display, "cannot read the template: " + e.getMessage());
+        } catch (SecurityException e) {
+            throw new TemplateProblem(display, "the template resolves outside its folder (a symbolic link may not leave it)");
         }
         Writer w = new OutputStreamWriter(out, StandardCharsets.UTF_8);
         try {
             t.process(model, w);
         } catch (TemplateException e) {
             String where = e.getLineNumber() == null ? display : display + ":" + e.getLineNumber() + ":" + e.getColumnNumber();
-            throw new TemplateProblem(where, "template error: " + firstLine(e.getMessageWithoutStackTop()));
+            throw new TemplateProblem(where, "template error: " + cause(e));
+        } catch (SecurityException e) {
+            throw new TemplateProblem(display, "template error: an included template resolves outside the template's folder"
+                    + " (a symbolic link may not leave it)");
         }
         w.flush();
+    }
+
+    /**
+     * What went wrong, named in our words where FreeMarker's text would not say it plainly: an
+     * undefined variable, an included or imported template that does not exist or lies outside
+     * the template's folder.
+     */
+    private static String cause(TemplateException e) {
+        if (e instanceof InvalidReferenceException && e.getBlamedExpressionString() != null) {
+            return "'" + e.getBlamedExpressionString() + "' is not defined (the template model is listed in DEVELOPERS.md,"
+                    + " \"How to add a template\")";
+        }
+        for (Throwable c = e.getCause(); c != null; c = c.getCause()) {
+            if (c instanceof TemplateNotFoundException nf) {
+                String name = nf.getTemplateName();
+                return "the included template '" + name + "' " + (name.startsWith("../") || name.contains("/../")
+                        ? "lies outside the template's folder" : "does not exist in the template's folder");
+            }
+            if (c instanceof MalformedTemplateNameException bad) {
+                return "the included template '" + bad.getTemplateName() + "' lies outside the template's folder";
+            }
+            if (c instanceof SecurityException) {
+                return "an included template resolves outside the template's folder (a symbolic link may not leave it)";
+            }
+        }
+        return firstLine(e.getMessageWithoutStackTop());
     }
 
     private static String firstLine(String s) {
