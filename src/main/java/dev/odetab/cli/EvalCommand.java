@@ -18,6 +18,7 @@ import dev.odetab.spec.SpecFile;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -132,6 +133,11 @@ final class EvalCommand implements Callable<Integer> {
             fmt = Format.parse(format);
         } catch (IllegalArgumentException e) {
             throw new InputError(optionWhere("--format"), e.getMessage());
+        }
+        Optional<String> aboveCap = Precision.formatAboveCap(fmt, capBits);
+        if (aboveCap.isPresent()) {
+            boolean capGiven = spec.commandLine().getParseResult().hasMatchedOption("--precision-cap-bits");
+            throw new InputError(optionWhere(capGiven ? "--precision-cap-bits" : "--format"), aboveCap.get());
         }
         Target target = new Target(fmt, roundingMode(), outOfRangePolicy());
         for (int i = 0; i < xs.size(); i++) {

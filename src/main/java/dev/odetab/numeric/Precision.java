@@ -2,6 +2,7 @@ package dev.odetab.numeric;
 
 import java.math.MathContext;
 import java.math.RoundingMode;
+import java.util.Optional;
 
 /** Conversions between binary precision (the unit users and the engine speak) and decimal digits. */
 public final class Precision {
@@ -27,6 +28,20 @@ public final class Precision {
     /** Bits carried by {@code digits10} decimal digits (rounded up): the inverse of {@link #digits10}. */
     public static int bitsForDigits(int digits10) {
         return (int) Math.ceil(digits10 * 3.3219280948873623) + 1;
+    }
+
+    /**
+     * Why format {@code f} cannot be rounded to within a precision cap of {@code capBits}, or empty
+     * when it can: an enclosure computed at p bits is about 2^−p wide relative to the value, so it
+     * decides a rounding to more than p significant bits only by chance, and the precision loop
+     * never works above the cap. Such a format is refused before any work.
+     */
+    public static Optional<String> formatAboveCap(Format f, int capBits) {
+        if (f.significantBits() <= capBits) {
+            return Optional.empty();
+        }
+        return Optional.of(f.name() + " holds " + f.significantBits() + " significant bits, more than the precision cap of " + capBits
+                + " bits can decide; raise the cap to at least " + f.significantBits() + " bits, or choose a narrower format");
     }
 
     /** Round-half-even context for midpoints at {@code precBits}. */

@@ -86,8 +86,8 @@ public final class PrecisionLoop {
     }
 
     /**
-     * A batch: the first round at {@code startBits} (as given: a start above the cap still runs
-     * once), then rounds over the undecided items only, at doubled precision, up to the cap.
+     * A batch: the first round at {@code min(startBits, capBits)} (a first attempt never exceeds
+     * the cap), then rounds over the undecided items only, at doubled precision, up to the cap.
      *
      * @param capMessage what stays undecided, for the cap exception (it names the items)
      * @return the precision of the last round
@@ -96,7 +96,7 @@ public final class PrecisionLoop {
     public static <K, E1 extends Exception, E2 extends Exception> int runBatch(List<K> items, Round<K, E1, E2> round,
             int startBits, int capBits, Function<List<K>, String> capMessage) throws E1, E2, PrecisionCapException {
         List<K> pending = items;
-        int prec = startBits;
+        int prec = Math.min(startBits, capBits);
         while (true) {
             List<K> still = round.decide(pending, prec);
             if (still.isEmpty()) {

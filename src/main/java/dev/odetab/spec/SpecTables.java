@@ -4,6 +4,7 @@ import dev.odetab.base.InputError;
 
 import dev.odetab.numeric.Format;
 import dev.odetab.numeric.OutOfRange;
+import dev.odetab.numeric.Precision;
 import dev.odetab.numeric.RoundingMode;
 import dev.odetab.numeric.Target;
 import dev.odetab.ode.FunctionDef;
@@ -20,6 +21,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import java.util.TreeSet;
 import org.tomlj.TomlArray;
@@ -96,7 +98,7 @@ final class SpecTables {
         List<Column> columns = quadrature ? null
                 : kind.equals("zeros") && !t.contains("columns") ? List.of(Column.parse("x")) : columns(base, t, terms);
         Target target = target(base, t);
-        int cap = capBits(base, t);
+        int cap = capBits(base, t, target.format());
         if (quadrature) {
             SpecQuadrature.Parsed rule = new SpecQuadrature(spec).table(base, t, fname, f, target.format());
             tableKind = rule.kind();
@@ -183,8 +185,11 @@ final class SpecTables {
         return new Target(format, rounding, outOfRange);
     }
 
-    /** The precision cap of the table's precision loops. */
-    private int capBits(List<String> base, TomlTable t) throws InputError {
+    /**
+     * The precision cap of the table's precision loops, which must be able to decide {@code format}
+     * ({@link Precision#formatAboveCap}: refused at the key, or at the format when the cap is the default).
+     */
+    private int capBits(List<String> base, TomlTable t, Format format) throws InputError {
         int cap = DEFAULT_CAP_BITS;
         if (t.contains("precision_cap_bits")) {
             Object v = t.get(List.of("precision_cap_bits"));
@@ -192,6 +197,10 @@ final class SpecTables {
                 throw spec.error(child(base, "precision_cap_bits"), "precision_cap_bits must be an integer from 64 to " + MAX_CAP_BITS);
             }
             cap = (int) (long) l;
+        }
+        Optional<String> aboveCap = Precision.formatAboveCap(format, cap);
+        if (aboveCap.isPresent()) {
+            throw spec.error(child(base, t.contains("precision_cap_bits") ? "precision_cap_bits" : "format"), aboveCap.get());
         }
         return cap;
     }
