@@ -110,8 +110,9 @@ final class EvalCommand implements Callable<Integer> {
             return Failures.badInput(e, function, err);
         } catch (PointLimit e) {
             PrecisionCapException cap = (PrecisionCapException) e.getCause();
-            return Failures.numericalLimit(function + " at x = " + e.point + ": ", cap,
-                    "; nothing is printed for this point (" + capAdvice(cap) + ")", err);
+            return Failures.numericalLimit(function + " at x = " + e.point + ": ", cap, cap.lastEnclosure() == null
+                    ? "; nothing is printed for this point" // an estimate before any work, which names the cap
+                    : "; nothing is printed for this point (" + capAdvice(cap) + ")", err);
         } finally {
             out.flush();
         }

@@ -14,6 +14,7 @@ import dev.odetab.ode.SingularCrossingException;
 import dev.odetab.expr.Poly;
 import java.math.BigDecimal;
 import java.math.MathContext;
+import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.ConcurrentHashMap;
@@ -25,7 +26,8 @@ import java.util.concurrent.ConcurrentHashMap;
  * is continued from there to x along the real line ({@link Continuation}); every returned ball
  * contains the exact value.
  * {@link #digits} adds Ziv's precision loop ({@link PrecisionLoop}): a decimal is returned only
- * when every point of the enclosure rounds to it.
+ * when every point of the enclosure rounds to it. Before the loop, a walk whose estimated cost
+ * ({@link WalkCost#check}) exceeds the cap or the walk limit is refused.
  */
 public final class FunctionEvaluator {
     /** Degree bound for the search for polynomial solutions. */
@@ -93,7 +95,8 @@ public final class FunctionEvaluator {
      * y(x), or y'(x) when {@code derivative}, correctly rounded to {@code target} (Ziv's loop;
      * exact polynomials are rounded from their exact value).
      *
-     * @throws PrecisionCapException when {@code capBits} is not enough to decide the rounding
+     * @throws PrecisionCapException when {@code capBits} is not enough to decide the rounding, or the
+     *     walk's estimated cost exceeds it or the walk limit ({@link WalkCost#check})
      */
     public static Decided entry(FunctionDef f, Rational x, boolean derivative, Target target, int capBits)
             throws ExprException, PrecisionCapException {
@@ -102,6 +105,7 @@ public final class FunctionEvaluator {
             return new Decided(Rounding.round(exact.get(), target), 0, 0, 0, 0, true);
         }
         int needed = target.format().significantBits();
+        WalkCost.check(Start.of(f), List.of(x), needed, capBits);
         Enclosure[] last = new Enclosure[1];
         PrecisionLoop.Outcome<Entry> out = PrecisionLoop.<Entry, ExprException>run(prec -> {
             last[0] = enclose(f, x, prec);
@@ -114,7 +118,8 @@ public final class FunctionEvaluator {
      * y(x), or y'(x) when {@code derivative}, correctly rounded to {@code digits10} significant
      * digits (round half to even).
      *
-     * @throws PrecisionCapException when {@code capBits} is not enough to decide the rounding
+     * @throws PrecisionCapException when {@code capBits} is not enough to decide the rounding, or the
+     *     walk's estimated cost exceeds it or the walk limit ({@link WalkCost#check})
      */
     public static Rounded digits(FunctionDef f, Rational x, boolean derivative, int digits10, int capBits)
             throws ExprException, PrecisionCapException {
@@ -124,6 +129,7 @@ public final class FunctionEvaluator {
             return new Rounded(v, Ball.of(exact.get(), Precision.bitsForDigits(digits10)), 0, 0, 0, 0, true);
         }
         int needed = Precision.bitsForDigits(digits10);
+        WalkCost.check(Start.of(f), List.of(x), needed, capBits);
         Enclosure[] last = new Enclosure[1];
         PrecisionLoop.Outcome<BigDecimal> out = PrecisionLoop.<BigDecimal, ExprException>run(prec -> {
             last[0] = enclose(f, x, prec);

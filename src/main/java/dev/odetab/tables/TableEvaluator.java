@@ -2,11 +2,18 @@ package dev.odetab.tables;
 
 import dev.odetab.base.ExprException;
 import dev.odetab.base.Progress;
+import dev.odetab.numeric.Rational;
+import dev.odetab.series.FunctionEvaluator;
 import dev.odetab.series.PrecisionCapException;
+import dev.odetab.series.PrecisionLoop;
+import dev.odetab.series.Start;
+import dev.odetab.series.WalkCost;
 import dev.odetab.tables.quadrature.GaussRule;
 import dev.odetab.tables.values.TaylorEvaluator;
 import dev.odetab.tables.values.ValuesEvaluator;
 import dev.odetab.tables.zeros.ZeroFinder;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Future;
@@ -44,6 +51,7 @@ public final class TableEvaluator {
      */
     public static TableResult evaluate(TableDef t, Progress progress, ExecutorService pool)
             throws ExprException, PrecisionCapException, OutOfRangeException {
+        checkCost(t);
         return t.kind().evaluate(t, new TableKind.Evaluators() {
             @Override
             public TableResult values(TableDef table, TableKind.Values kind) throws ExprException, PrecisionCapException, OutOfRangeException {
@@ -66,6 +74,46 @@ public final class TableEvaluator {
                 return reported(GaussRule.table(table, kind), progress);
             }
         });
+    }
+
+    /**
+     * Heuristic: refuses, before any work, a table whose walks the estimate ({@link WalkCost#check})
+     * puts above its precision cap or the walk limit: the walks from the normalization to the ends
+     * of its grid, or of a zeros search without a count (with a count the search may stop early).
+     * Polynomial solutions are exact and walk nowhere; quadrature rules take their nodes from the
+     * family, not from a walk.
+     *
+     * @throws PrecisionCapException naming the table and the estimate
+     */
+    static void checkCost(TableDef t) throws ExprException, PrecisionCapException {
+        if (FunctionEvaluator.polynomial(t.function()).isPresent()) {
+            return;
+        }
+        List<Rational> ends = new ArrayList<>();
+        if (t.kind().givenPoints().isPresent()) {
+            Grid g = t.kind().givenPoints().get();
+            if (g.size() == 0) {
+                return;
+            }
+            ends.add(g.center(0));
+            ends.add(g.center(g.size() - 1));
+            if (g instanceof Grid.Points p) {
+                ends.clear();
+                ends.add(p.points().stream().min(Rational::compareTo).orElseThrow());
+                ends.add(p.points().stream().max(Rational::compareTo).orElseThrow());
+            }
+        } else if (t.kind() instanceof TableKind.Zeros z && z.count() == 0) {
+            ends.add(z.from());
+            ends.add(z.to());
+        }
+        if (ends.isEmpty()) {
+            return;
+        }
+        try {
+            WalkCost.check(Start.of(t.function()), ends, PrecisionLoop.chooseStartBits(t.format()), t.capBits());
+        } catch (PrecisionCapException e) {
+            throw new PrecisionCapException("table " + t.name() + ": " + e.getMessage(), e.capBits());
+        }
     }
 
     /** A table whose rows were all found at once, reported to {@code progress} as such. */
