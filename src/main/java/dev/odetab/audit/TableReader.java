@@ -27,6 +27,9 @@ public final class TableReader {
         String display = file.toString();
         String text;
         try {
+            if (Files.exists(file) && !Files.isRegularFile(file)) {
+                throw new InputError(display, "not a regular file (a FIFO, a device or a folder): audit reads a table from a file");
+            }
             text = new String(Files.readAllBytes(file), StandardCharsets.UTF_8);
         } catch (NoSuchFileException e) {
             throw new InputError(display, "no such file");
