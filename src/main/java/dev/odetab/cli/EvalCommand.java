@@ -12,6 +12,8 @@ import dev.odetab.numeric.Rational;
 import dev.odetab.ode.FunctionDef;
 import dev.odetab.series.FunctionEvaluator;
 import dev.odetab.series.PrecisionCapException;
+import dev.odetab.series.Start;
+import dev.odetab.series.WalkCost;
 import dev.odetab.ode.SingularCrossingException;
 import dev.odetab.base.InputError;
 import dev.odetab.spec.SpecFile;
@@ -34,6 +36,8 @@ import picocli.CommandLine.Parameters;
 final class EvalCommand implements Callable<Integer> {
     static final int DEFAULT_CAP_BITS = SpecFile.DEFAULT_PRECISION_CAP_BITS;
     static final int MAX_CAP_BITS = 1 << 20;
+    /** Walks longer than this (in estimated steps) are announced on a terminal: a few seconds of work. */
+    static final int ANNOUNCED_STEPS = 500;
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
@@ -94,6 +98,7 @@ final class EvalCommand implements Callable<Integer> {
                 return printEntries(f, xs, out, err);
             }
             for (int i = 0; i < xs.size(); i++) {
+                announceLongWalk(f, xs.get(i), points.get(i), err);
                 FunctionEvaluator.Rounded r;
                 try {
                     r = FunctionEvaluator.digits(f, xs.get(i), derivative, digits, capBits);
@@ -115,6 +120,23 @@ final class EvalCommand implements Callable<Integer> {
                     : "; nothing is printed for this point (" + capAdvice(cap) + ")", err);
         } finally {
             out.flush();
+        }
+    }
+
+    /**
+     * On a terminal, one line before a point whose walk is estimated ({@link WalkCost}) at more
+     * than {@value #ANNOUNCED_STEPS} steps (some seconds of work), so that a slow point is never
+     * silent; nothing on a pipe, so stderr of scripts is unchanged.
+     */
+    private static void announceLongWalk(FunctionDef f, Rational x, String point, PrintWriter err) throws ExprException {
+        if (!ProgressDisplay.stderrIsTerminal() || FunctionEvaluator.polynomial(f).isPresent()) {
+            return;
+        }
+        double steps = WalkCost.estimate(Start.of(f), x).steps();
+        if (steps > ANNOUNCED_STEPS) {
+            err.println("odetab: working: x = " + point + ", a walk of " + WalkCost.figure(steps) + " steps from x = "
+                    + f.at() + " (the limit is " + (long) WalkCost.MAX_STEPS + ")");
+            err.flush();
         }
     }
 
@@ -142,6 +164,7 @@ final class EvalCommand implements Callable<Integer> {
         }
         Target target = new Target(fmt, roundingMode(), outOfRangePolicy());
         for (int i = 0; i < xs.size(); i++) {
+            announceLongWalk(f, xs.get(i), points.get(i), err);
             FunctionEvaluator.Decided r;
             try {
                 r = FunctionEvaluator.entry(f, xs.get(i), derivative, target, capBits);
