@@ -20,13 +20,15 @@ import java.util.List;
  * Measures every entry of a foreign table against the exact value.
  *
  * <p>Trust level: Rigorous for every decision, Heuristic for the printed digits. The exact
- * value at each grid point is enclosed by a {@link GridWalk} (METHODS §4); an entry is
+ * value at each grid point is enclosed by a {@link GridWalk} (docs/methods.md §4); an entry is
  * settled when (1) its enclosure lies in one binade, so ulp(exact) is known exactly
  * ({@link Ulp}), (2) the enclosure is narrower than 2^−10 ulp, so the printed error is good to
  * about 1e-3 ulp, and (3) the whole error interval is on one side of the tolerance. Unsettled
  * entries are walked again at twice the precision, up to the table's precision cap; beyond it
  * the audit stops with {@link PrecisionCapException}, never a guess ({@link PrecisionLoop#runBatch}). The reported error is the
  * error at the enclosure's midpoint, with the enclosure radius in ulps as its bound.
+ *
+ * <p>Derivation: docs/methods.md §15 (audit).
  */
 public final class Auditor {
     /** The most significant digits the report's exact column shows (fewer when the enclosure decides fewer). */

@@ -19,6 +19,8 @@ import java.math.BigInteger;
  * </ul>
  * With this ulp, every neighbour of x in the format's binade of x is one ulp apart, so a
  * correctly rounded (nearest) entry is within 0.5 ulp and a faithful one within 1 ulp.
+ *
+ * <p>Derivation: docs/methods.md §15 (errors in ulps).
  */
 final class Ulp {
     private Ulp() {

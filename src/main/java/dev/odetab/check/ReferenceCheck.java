@@ -39,6 +39,8 @@ import java.util.stream.Stream;
  * <p>Last, one heuristic cross-check ({@link IndependentCheck}): the elementary functions of
  * {@code BallFunctions} against big-math, an independent implementation. A disagreement fails
  * the check; agreement proves nothing beyond the two implementations agreeing.
+ *
+ * <p>Derivation: docs/methods.md §15 (reference checks).
  */
 public final class ReferenceCheck {
     private ReferenceCheck() {

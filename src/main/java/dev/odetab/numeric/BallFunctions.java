@@ -18,7 +18,9 @@ import java.util.concurrent.ConcurrentHashMap;
  * exact input is then about 2^-precBits. Doubles appear only as {@code …Estimate} values that
  * choose term counts, shifts and working precisions; every radius comes from an exact
  * comparison, from ball arithmetic or from a tail bound rounded upward by {@link Directed}.
- * Methods: METHODS §3.
+ * Methods: docs/methods.md §3.
+ *
+ * <p>Derivation: docs/methods.md §13 (rigorous elementary constants).
  */
 public final class BallFunctions {
     /** Guard bits added to the requested precision for internal work. */

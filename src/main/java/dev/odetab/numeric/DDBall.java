@@ -22,6 +22,8 @@ import java.math.BigDecimal;
  * plus {@link #TINY} = 2^−1050, which exceeds 16 subnormal rounding errors; so each radius is an
  * upper bound. A result that is infinite or NaN anywhere is caught by {@link #isFinite()}: the
  * caller must then give up (an overflow proves nothing).
+ *
+ * <p>Derivation: docs/methods.md §10 (the fast tier: the error bound of each operation).
  */
 public final class DDBall {
     /** u = 2^−53, the unit roundoff of binary64. */

@@ -10,7 +10,7 @@ import java.util.Optional;
  *
  * <p>Trust level: Rigorous. {@link #round} returns a value only when every point of the ball
  * rounds to it, so it is the correctly rounded value of the exact number inside (Ziv's test,
- * METHODS §5); otherwise it returns empty and the caller raises the precision.
+ * docs/methods.md §5); otherwise it returns empty and the caller raises the precision.
  */
 public final class DecimalDigits {
     private DecimalDigits() {

@@ -23,6 +23,8 @@ import java.util.Objects;
  *                 OUT_OF_RANGE the end of the range that was exceeded
  * @param hi       double-double only: the binary64 head, else null
  * @param lo       double-double only: the binary64 tail, else null
+ *
+ * <p>Derivation: docs/methods.md §14 (shortest decimals and hex literals).
  */
 public record Entry(Format format, Kind kind, boolean negative, Rational value, Entry hi, Entry lo) {
     /** What sort of entry it is. */

@@ -13,7 +13,7 @@ import java.util.Optional;
 
 /**
  * Correctly rounded table entries: of an exact rational ({@link #round}) and of a ball
- * whose points all round alike ({@link #decide}, Ziv's test, METHODS §5).
+ * whose points all round alike ({@link #decide}, Ziv's test, docs/methods.md §5).
  *
  * <p>Every rounding here is done in exact integer arithmetic: |x| = a/b is scaled by a
  * power of two (or ten) and split into an integer part and a remainder; the remainder
@@ -76,7 +76,7 @@ public final class Rounding {
 
     /**
      * Rigorous: the entry that every point of {@code enclosure} rounds to, or empty when two
-     * points round differently (Ziv's test, METHODS §5; Ziv, ACM TOMS 17(3), 1991).
+     * points round differently (Ziv's test, docs/methods.md §5; Ziv, ACM TOMS 17(3), 1991).
      *
      * <p>An exact ball (radius 0) rounds its midpoint exactly. Otherwise both ends are
      * rounded exactly and compared. Every rounding in {@link #round} has a value that is

@@ -9,7 +9,7 @@ import dev.odetab.numeric.Rational;
  *
  * <p>Trust level: Exact. The reduced form divides out the factors common to all three
  * coefficients (they do not change the solutions away from their roots) and scales P2 to be
- * monic; singular points are the roots of the reduced P2 (METHODS §1, DLMF 2.7(i)).
+ * monic; singular points are the roots of the reduced P2 (docs/methods.md §1, DLMF 2.7(i)).
  */
 public record Equation(Poly p2, Poly p1, Poly p0) {
     public Equation {

@@ -7,7 +7,9 @@ import java.math.MathContext;
 
 /**
  * Segments of the real line and the singular points on them: a walk of analytic continuation
- * (METHODS §4) may not cross or end on a real root of P2.
+ * (docs/methods.md §4) may not cross or end on a real root of P2.
+ *
+ * <p>Derivation: docs/methods.md §12 (singular points).
  */
 public final class RealPath {
     private RealPath() {

@@ -45,6 +45,8 @@ import java.util.List;
  * <p>Failure: when a disk overlaps another or cannot be decided real or non-real, the
  * precision doubles from {@link #START_PREC_BITS} up to {@link #MAX_PREC_BITS}; beyond that
  * an {@link ArithmeticException} names the polynomials.
+ *
+ * <p>Derivation: docs/methods.md §12 (root disks).
  */
 final class RootIsolation {
     static final int START_PREC_BITS = 128;

@@ -14,7 +14,7 @@ import java.util.List;
  * The singular points of P2 y'' + P1 y' + P0 y = 0, located, classified and isolated.
  *
  * <p>Mathematics. Work on the reduced equation (common factors removed, P2 monic; {@link
- * Equation#reduced()}); its singular points are the complex roots of P2 (METHODS §1, DLMF
+ * Equation#reduced()}); its singular points are the complex roots of P2 (docs/methods.md §1, DLMF
  * 2.7(i)).
  * <ol>
  * <li>Square-free decomposition P2 = Π_k f_k^k with f_k square-free and pairwise coprime
@@ -30,6 +30,8 @@ import java.util.List;
  * rational polynomial arithmetic.
  * <li>The roots of each of these class polynomials are isolated by {@link RootIsolation}.
  * </ol>
+ *
+ * <p>Derivation: docs/methods.md §12 (singular points).
  */
 public final class SingularPoints {
     /** Significant digits of {@link #radiusLowerBound}. */
@@ -54,7 +56,7 @@ public final class SingularPoints {
      * the reduced P2 and the disks are pairwise disjoint; {@code exact}, when not null, was
      * verified by exact Gaussian-rational evaluation; {@code real} is proven either way.
      * Empty when the reduced P2 is constant (no singular point, e.g. Airy).
-     * Sources: DLMF 2.7(i)/(ii) (Fuchs), METHODS §1, the papers cited at {@link RootIsolation}.
+     * Sources: DLMF 2.7(i)/(ii) (Fuchs), docs/methods.md §1, the papers cited at {@link RootIsolation}.
      *
      * @throws ArithmeticException when the roots cannot be separated at the precision cap
      *                             ({@link RootIsolation#MAX_PREC_BITS} bits)
@@ -96,7 +98,7 @@ public final class SingularPoints {
      * of the distance from {@code at} to the nearest singular point: min over the singular
      * points of |at − center| − radius (exact distances for exactly known points), clamped at
      * zero. By Fuchs' theorem every solution's power series at an ordinary point converges in
-     * the open disk reaching the nearest singular point (METHODS §1; DLMF 2.7(i)), so this is a
+     * the open disk reaching the nearest singular point (docs/methods.md §1; DLMF 2.7(i)), so this is a
      * guaranteed radius of convergence of every solution. Returns null when there is no
      * singular point (infinite radius).
      *

@@ -16,7 +16,7 @@ import java.math.MathContext;
  *
  * <p>Trust level: Rigorous. A step to x + t ({@link #step}) sums the series of the canonical
  * solutions (y(x) = 1, y'(x) = 0 and y(x) = 0, y'(x) = 1) at x + t, T = [[A, B], [A', B']], as balls
- * (rounding and tail included, METHODS §2); the exact midpoints go to T·m = m0·(A, A') +
+ * (rounding and tail included, docs/methods.md §2); the exact midpoints go to T·m = m0·(A, A') +
  * m1·(B, B') in ball arithmetic, whose radii δ the new error takes in; and the old error is
  * carried by linearity: the exact new state is T·(exact old state), so
  * E' &lt;= ‖D' T D⁻¹‖₂ E + w' δ0 + δ1 with D = diag(w, 1), D' = diag(w', 1). ‖M‖₂ of a 2×2
@@ -32,6 +32,8 @@ import java.math.MathContext;
  * @param m1 midpoint of y'(x)
  * @param error E, an upper bound of the weighted error
  * @param weight w &gt; 0
+ *
+ * <p>Derivation: docs/methods.md §11 (the carried state).
  */
 public record CarriedState(Rational x, BigDecimal m0, BigDecimal m1, BigDecimal error, BigDecimal weight) {
     /** Precision of the norm bound: it only scales an error bound (a heuristic choice). */

@@ -10,7 +10,7 @@ import dev.odetab.ode.SingularCrossingException;
 /**
  * Analytic continuation of a solution along the real line, by a chain of Taylor steps.
  *
- * <p>Trust level: Rigorous (METHODS §4). Each step sums the series at the current center c
+ * <p>Trust level: Rigorous (docs/methods.md §4). Each step sums the series at the current center c
  * for the state at c + h with {@link LocalSeries#sum}, whose result encloses the exact state;
  * the next step starts from those balls, so the final balls contain y and y' at the target.
  * Every center is an exact rational (from + k·2^e, then the target itself), so the shifted
@@ -73,7 +73,7 @@ public final class Continuation {
     /**
      * Rigorous: balls containing y and y' at every point {@code center + t}, t in the ball
      * {@code t}, from balls containing them at the exact {@code center}: one series step with a
-     * ball as its length (METHODS §2, the tail bound over the whole ball), for points that are
+     * ball as its length (docs/methods.md §2, the tail bound over the whole ball), for points that are
      * not rational, such as Chebyshev nodes.
      *
      * @throws LocalSeries.StepTooLongException when |t| is too long for a tail bound

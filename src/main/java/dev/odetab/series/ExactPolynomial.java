@@ -12,10 +12,10 @@ import java.util.Optional;
  * Detection of polynomial solutions: a terminating Taylor series, found from the recurrence
  * in exact rational arithmetic.
  *
- * <p>Trust level: Exact. With exact y(alpha) and y'(alpha), the coefficients c_m of METHODS §1
+ * <p>Trust level: Exact. With exact y(alpha) and y'(alpha), the coefficients c_m of docs/methods.md §1
  * are computed as rationals. The recurrence expresses c_m through c_(m−1) … c_(m−J) only, so
  * once J consecutive coefficients vanish every later one does too, and the solution is exactly
- * the polynomial Σ c_m (x − alpha)^m (METHODS §5, "the exact path"). Detection gives up (empty
+ * the polynomial Σ c_m (x − alpha)^m (docs/methods.md §5, "the exact path"). Detection gives up (empty
  * result, never a wrong one) when no such run of zeros appears up to {@code maxDegree} or the
  * coefficients grow past a size limit; the caller then uses the series with balls.
  */

@@ -7,7 +7,7 @@ import dev.odetab.ode.Equation;
 
 /**
  * One Taylor step of a solution in double-double ball arithmetic ({@link DDBall}): the fast
- * tier of grid evaluation (METHODS §4, dense grids).
+ * tier of grid evaluation (docs/methods.md §4, dense grids).
  *
  * <p>Trust level: Rigorous. Given balls containing y(c) and y'(c) at an exact point c, a ball
  * containing c, and a ball containing the exact step t, {@link #step} returns balls containing
@@ -15,8 +15,8 @@ import dev.odetab.ode.Equation;
  * tier). It is the computation of {@link LocalSeries#sum} with {@link Recurrence} and
  * {@link TailBound} carried out in DDBall arithmetic: the Taylor coefficients of P2, P1, P0 at c
  * are enclosed by a ball Taylor shift of the exact coefficients; c_m = Σ_j beta_j(m) c_(m−j)
- * (METHODS §1) is enclosed term by term; the partial sums are balls; and the tail after N terms is
- * bounded as in {@link TailBound} (METHODS §2): with r = T/q for T &gt;= |t| and q in {1/2, 3/4},
+ * (docs/methods.md §1) is enclosed term by term; the partial sums are balls; and the tail after N terms is
+ * bounded as in {@link TailBound} (docs/methods.md §2): with r = T/q for T &gt;= |t| and q in {1/2, 3/4},
  * when Σ_j B_j(N) r^j &lt;= 1 (checked with upward-inflated arithmetic),
  * Σ_(m&gt;=N) |c_m t^m| &lt;= K q^N/(1 − q) and Σ_(m&gt;=N) m |c_m| |t|^(m−1) &lt;=
  * (K q^(N−1)/r)(N − (N−1)q)/(1 − q)², K q^(N−1) = max_(N−J&lt;=i&lt;N) |c_i t^i| q^(N−1−i).

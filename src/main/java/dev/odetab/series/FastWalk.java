@@ -9,7 +9,7 @@ import dev.odetab.ode.SingularCrossingException;
 /**
  * Enclosures of a solution on a run of equally spaced points x0, x0 + h, …, in double-double
  * ball arithmetic: one long jump to x0 in BigDecimal balls, then short steps from point to point
- * ({@link FastStepper}; METHODS §4, dense grids and parallel chunks).
+ * ({@link FastStepper}; docs/methods.md §4, dense grids and parallel chunks).
  *
  * <p>Trust level: Rigorous. The state at x0 is given as BigDecimal balls (the caller's long
  * jump, {@link GridWalk} at {@link #START_BITS} bits), converted outward to {@link DDBall}s. Every
@@ -21,6 +21,8 @@ import dev.odetab.ode.SingularCrossingException;
  * BigDecimal tier. The long jump is not done in double-double: over long distances the radius of
  * componentwise balls grows like exp(∫ |ω|) (the wrapping effect), which a 192-bit start absorbs
  * and a 106-bit one does not.
+ *
+ * <p>Derivation: docs/methods.md §10 (the fast tier).
  */
 public final class FastWalk {
     /** Working precision of the long jumps: enough that their radius does not dominate 106-bit balls. */

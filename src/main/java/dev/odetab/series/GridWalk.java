@@ -10,7 +10,7 @@ import java.util.List;
 /**
  * Enclosures of a function at many points, reusing the work between neighbours: the solution
  * is continued from the normalization point to the nearest grid point, then from grid point
- * to grid point (METHODS §4, dense grids), outward in both directions.
+ * to grid point (docs/methods.md §4, dense grids), outward in both directions.
  *
  * <p>Trust level: Rigorous. Each leg is a {@link Continuation}, so every returned jet contains
  * the exact value and derivative at its point; the radius grows along the walk, and the caller

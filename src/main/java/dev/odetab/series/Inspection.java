@@ -14,7 +14,7 @@ import java.util.Optional;
 
 /**
  * What {@code odetab inspect} shows of a function's series: whether the solution is an exact
- * polynomial, the coefficient recurrence at a point (METHODS §1) and the first Taylor
+ * polynomial, the coefficient recurrence at a point (docs/methods.md §1) and the first Taylor
  * coefficients there.
  * Computed here, so that the command line only prints.
  *

@@ -17,7 +17,7 @@ import dev.odetab.series.Recurrence;
  *
  * <p>Trust level: Rigorous. Every returned ball contains the exact quantity: the series form
  * sums the Taylor series at c from balls containing y(c), y'(c) with the proven tail of
- * METHODS §2 ({@link LocalSeries}); the polynomial form evaluates the exactly shifted
+ * docs/methods.md §2 ({@link LocalSeries}); the polynomial form evaluates the exactly shifted
  * polynomial p(c + t). y'' comes from the equation, y'' = −(P1 y' + P0 y)/P2 (reduced
  * equation), evaluated in ball arithmetic over the same ball of x; it is null where that ball
  * of P2 contains 0 (the cell reaches a singular point), which callers treat as "not proven".

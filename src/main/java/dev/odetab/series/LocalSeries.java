@@ -32,7 +32,7 @@ public final class LocalSeries {
 
     /**
      * Thrown when no tail bound is available at this step length: |t| is not inside the
-     * contraction disk of METHODS §2 at this center. The caller shortens the step.
+     * contraction disk of docs/methods.md §2 at this center. The caller shortens the step.
      */
     public static final class StepTooLongException extends RuntimeException {
         private static final long serialVersionUID = 1L;
@@ -174,7 +174,7 @@ public final class LocalSeries {
 
     /**
      * Balls containing the first {@code count} Taylor coefficients c_0 … c_(count−1) at the
-     * recurrence's center of the solution with c_0 in y0 and c_1 in y1 (METHODS §1).
+     * recurrence's center of the solution with c_0 in y0 and c_1 in y1 (docs/methods.md §1).
      */
     public static Ball[] coefficients(Recurrence rec, Ball y0, Ball y1, int count, int precBits) {
         Ball[] c = new Ball[count];
@@ -203,7 +203,7 @@ public final class LocalSeries {
     }
 
     /**
-     * Heuristic: the radius of the disk in which the tail bound of METHODS §2 can work at this
+     * Heuristic: the radius of the disk in which the tail bound of docs/methods.md §2 can work at this
      * center, i.e. the positive root of Σ_j |a_j/a_0| r^j = 1 (infinite when P2 is constant).
      * Used to choose step lengths; never part of a bound.
      */

@@ -8,7 +8,7 @@ import java.util.function.Function;
 import java.util.function.Supplier;
 
 /**
- * Ziv's strategy (METHODS §5; Ziv, ACM TOMS 17(3), 1991), the one loop that raises the working
+ * Ziv's strategy (docs/methods.md §5; Ziv, ACM TOMS 17(3), 1991), the one loop that raises the working
  * precision until an answer is decided: evaluate enclosures at some precision, decide what they
  * allow, and go again at a higher precision for the rest, until everything is decided or the cap
  * is reached ({@link PrecisionCapException}, never a guess).

@@ -12,7 +12,7 @@ import java.math.BigInteger;
  *
  * <p>Trust level: Exact. With P2(alpha+t) = Σ a_i t^i, P1(alpha+t) = Σ b_i t^i and
  * P0(alpha+t) = Σ d_i t^i (exact Taylor shifts), y = Σ c_m t^m solves the equation iff for
- * m &gt;= 2 (METHODS §1, collecting t^(m−2)):
+ * m &gt;= 2 (docs/methods.md §1, collecting t^(m−2)):
  * <pre>
  *   c_m = Σ_{j=1..J} beta_j(m) c_{m−j},
  *   beta_j(m) = −[a_j (m−j)(m−j−1) + b_{j−1} (m−j) + d_{j−2}] / (a_0 m (m−1)),
@@ -113,7 +113,7 @@ public final class Recurrence {
     }
 
     /**
-     * B_j(M) of METHODS §2, rounded up: |a_j/a_0| + |b_{j−1}|/(|a_0|(M−1)) + |d_{j−2}|/(|a_0| M(M−1)).
+     * B_j(M) of docs/methods.md §2, rounded up: |a_j/a_0| + |b_{j−1}|/(|a_0|(M−1)) + |d_{j−2}|/(|a_0| M(M−1)).
      * For m &gt;= M &gt; J, |beta_j(m)| &lt;= B_j(M) because 0 &lt; (m−j)(m−j−1) &lt; m(m−1),
      * (m−j)/(m(m−1)) &lt;= 1/(m−1) &lt;= 1/(M−1) and 1/(m(m−1)) &lt;= 1/(M(M−1)).
      */
@@ -131,7 +131,7 @@ public final class Recurrence {
         return Directed.absUp(s);
     }
 
-    /** |a_j / a_0| exactly: the limit of B_j(M) for large M (the Cauchy-type disk of METHODS §2). */
+    /** |a_j / a_0| exactly: the limit of B_j(M) for large M (the Cauchy-type disk of docs/methods.md §2). */
     public Rational leadingRatio(int j) {
         return aOverA0[j];
     }

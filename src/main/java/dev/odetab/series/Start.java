@@ -14,9 +14,9 @@ import dev.odetab.ode.FunctionDef;
  *
  * <p>One kind exists today, {@link OrdinaryStart}: the normalization is given at an ordinary
  * point (y(a), y'(a) as exact constant expressions). A start at a regular singular point s
- * (METHODS §8, Frobenius series) will be a second implementation, {@code FrobeniusStart}: the
+ * (docs/methods.md §8, Frobenius series) will be a second implementation, {@code FrobeniusStart}: the
  * normalization fixes the coefficients of the Frobenius solution x^λ Σ c_k (x − s)^k (and its
- * logarithmic companion), whose tail is bounded as in METHODS §8; its {@link #point} is an exact
+ * logarithmic companion), whose tail is bounded as in docs/methods.md §8; its {@link #point} is an exact
  * ordinary point s + h inside the Frobenius series' radius (h a power of two below a fraction of
  * the distance to the nearest other singular point), and its {@link #jet} is the sum of that
  * series and its derivative at s + h, as balls. The walker then never sees s: it starts at

@@ -5,7 +5,7 @@ import dev.odetab.ode.Equation;
 import java.math.BigInteger;
 
 /**
- * The one home of the step-length and term-count heuristics of the Taylor walks (METHODS §2,
+ * The one home of the step-length and term-count heuristics of the Taylor walks (docs/methods.md §2,
  * §4).
  *
  * <p>Trust level: Heuristic. Everything here only chooses: a step too long for the tail bound
@@ -14,7 +14,7 @@ import java.math.BigInteger;
  *
  * <p>The rule, at an exact center c of the reduced equation P2 y'' + P1 y' + P0 y = 0: the
  * length {@code min(r·ρ, s/(1 + √|P0/P2| + |P1/P2|))}, with ρ the contraction radius of
- * METHODS §2 ({@link LocalSeries#contractionRadiusEstimate}) and the second term about a sixth
+ * docs/methods.md §2 ({@link LocalSeries#contractionRadiusEstimate}) and the second term about a sixth
  * of a local period (times s) where the solution oscillates, a local growth length where it
  * grows. The fractions r and s are named per use ({@link Use}): they differ because the callers'
  * arithmetic differs, and the proven error figures of the tables depend on the steps taken, so

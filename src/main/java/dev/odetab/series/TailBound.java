@@ -8,7 +8,7 @@ import java.math.RoundingMode;
 /**
  * The rigorous bound on the tail of a Taylor series whose coefficients obey a {@link Recurrence}.
  *
- * <p>Trust level: Rigorous (METHODS §2). With u_i = c_i t^i, pick r &gt; |t| such that
+ * <p>Trust level: Rigorous (docs/methods.md §2). With u_i = c_i t^i, pick r &gt; |t| such that
  * Σ_j B_j(N) r^j &lt;= 1 (checked with upward rounding). For K = max_{N−J &lt;= i &lt; N} |c_i| r^i,
  * induction on m gives |c_m| &lt;= Σ_j |beta_j(m)| K r^(j−m) &lt;= K r^(−m) Σ_j B_j(N) r^j
  * &lt;= K r^(−m) for every m &gt;= N−J. With q = |t|/r &lt; 1 and K q^(N−1) = max_i |u_i| q^(N−1−i):
@@ -17,7 +17,7 @@ import java.math.RoundingMode;
  *   Σ_{m&gt;=N} m |c_m| |t|^(m−1) &lt;= (K q^(N−1) / r) (N − (N−1) q) / (1 − q)^2
  * </pre>
  * (the second is d/dq of the geometric series). Taking M = N and the largest admissible r keeps
- * the bound within a small factor of the true tail (METHODS §2).
+ * the bound within a small factor of the true tail (docs/methods.md §2).
  */
 final class TailBound {
     private static final MathContext RADIUS_CHOICE = new MathContext(10, RoundingMode.FLOOR);

@@ -14,7 +14,7 @@ import java.util.Locale;
  *
  * <p>Trust level: Heuristic. Nothing here sets a radius; the figures only decide whether to start
  * (and what to tell the user). In doubles, from the reduced equation P2 y'' + P1 y' + P0 y = 0 and
- * its local rate ω(x) = √|P0/P2| (METHODS §4: the solutions behave like e^(±∫ω) where −P0/P2 &gt; 0
+ * its local rate ω(x) = √|P0/P2| (docs/methods.md §4: the solutions behave like e^(±∫ω) where −P0/P2 &gt; 0
  * and oscillate with frequency ω where it is negative):
  * <ul>
  * <li>{@code growthBits}: where the walk follows a recessive solution through a region of growth

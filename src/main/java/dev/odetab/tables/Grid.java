@@ -15,6 +15,8 @@ import java.util.Objects;
  * The given points of a values or taylor table (from/to/step, Chebyshev nodes, a list); a grid
  * never goes through a binary double. Kinds whose points are found (zeros, Gauss nodes) have none:
  * see {@link TableKind}.
+ *
+ * <p>Derivation: docs/methods.md §16 (grids of irrational points).
  */
 public sealed interface Grid {
     /**

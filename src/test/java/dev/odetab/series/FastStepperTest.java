@@ -14,7 +14,7 @@ import org.apfloat.ApfloatMath;
 import org.junit.jupiter.api.Test;
 
 /**
- * {@link FastStepper}, one double-double Taylor step (METHODS §1–2 in DDBall arithmetic): its
+ * {@link FastStepper}, one double-double Taylor step (docs/methods.md §1–2 in DDBall arithmetic): its
  * balls contain apfloat 1.15.0's values of e^x and Ai, Ai' and the BigDecimal step of
  * {@link LocalSeries} from the same state; a step onto a singular point gives null, never a
  * ball.

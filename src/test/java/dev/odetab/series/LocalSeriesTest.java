@@ -13,7 +13,7 @@ import org.apfloat.ApfloatMath;
 import org.junit.jupiter.api.Test;
 
 /**
- * {@link LocalSeries}, one Taylor step with its tail bound (METHODS §1–2): the coefficients of
+ * {@link LocalSeries}, one Taylor step with its tail bound (docs/methods.md §1–2): the coefficients of
  * y'' = y contain 1/m! exactly; the sums contain apfloat 1.15.0's exp and Airy values; rational
  * and ball steps, and two precisions, give overlapping balls; a step that reaches the nearest
  * singular point has no tail bound.

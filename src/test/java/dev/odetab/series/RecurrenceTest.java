@@ -6,7 +6,7 @@ import dev.odetab.numeric.Rational;
 import org.junit.jupiter.api.Test;
 
 /**
- * {@link Recurrence} against the closed forms of its coefficients beta_j(m) (METHODS §1) for
+ * {@link Recurrence} against the closed forms of its coefficients beta_j(m) (docs/methods.md §1) for
  * Airy's and Legendre's equations, and its order.
  */
 class RecurrenceTest {

@@ -12,7 +12,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 
 /**
- * The tail bound of METHODS §2 against tails computed exactly: coefficients by the recurrence
+ * The tail bound of docs/methods.md §2 against tails computed exactly: coefficients by the recurrence
  * in exact rational arithmetic, the tail summed far beyond N (the neglected remainder is far
  * below the tolerance of the comparison). The bound must never be below the true tail and
  * must stay within a small factor of it.
@@ -63,7 +63,7 @@ class TailBoundTest {
             assertTrue(b.derivativeBound().compareTo(trueDeriv) >= 0, "derivative bound below the true tail at N = " + n);
             if (trueTail.signum() > 0 && trueTail.compareTo(new BigDecimal("1e-35")) > 0) {
                 double ratio = b.valueBound().divide(trueTail, mc).doubleValue();
-                // METHODS §2 reports a factor 3 for these cases; the first N, where the admissible r is
+                // docs/methods.md §2 reports a factor 3 for these cases; the first N, where the admissible r is
                 // still small, may be looser, but never by more than a factor 20.
                 assertTrue(ratio < (n >= 20 ? 3 : 20), "bound too loose at alpha=" + alpha + ", t=" + t + ", N=" + n + ": " + ratio);
                 worst = Math.max(worst, n >= 20 ? ratio : 0);

@@ -5,7 +5,9 @@ import dev.odetab.ode.FunctionDef;
 import java.util.List;
 import java.util.Map;
 
-/** A built-in family: a name from standard notation, its parameters, and how to build one member. */
+/** A built-in family: a name from standard notation, its parameters, and how to build one member. *
+ * <p>Derivation: docs/methods.md §7 (families and their normalizations).
+ */
 public interface Family {
     /** The name on the command line, e.g. {@code airy-ai}. */
     String name();

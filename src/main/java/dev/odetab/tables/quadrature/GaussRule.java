@@ -34,7 +34,7 @@ import java.util.OptionalInt;
 
 /**
  * Gauss quadrature rules as tables: the n nodes ascending and their weights, each entry correctly
- * rounded from a proven enclosure (METHODS §6).
+ * rounded from a proven enclosure (docs/methods.md §6).
  *
  * <p>Trust level: Rigorous. Nodes. The zeros of p_n are simple and lie in the open interval of
  * orthogonality (DLMF 18.2(vi)). Eigenvalues of the Jacobi matrix in doubles (Golub and Welsch

@@ -1,7 +1,7 @@
 /**
  * Gauss quadrature tables: {@link dev.odetab.tables.quadrature.GaussRule} proves the n nodes
  * of a family's rule by one interval Newton step each from heuristic seeds, and encloses each
- * weight from the family's closed formula (METHODS §6); the families hold their recurrences and
+ * weight from the family's closed formula (docs/methods.md §6); the families hold their recurrences and
  * weight constants ({@link dev.odetab.ode.family.OrthogonalFamily}), and
  * {@link dev.odetab.tables.quadrature.GaussPolynomial} evaluates them exactly for every family.
  *

@@ -37,6 +37,8 @@ import java.util.concurrent.CompletableFuture;
  * entries in round-to-nearest-even are decided in double arithmetic ({@link DDBall#roundBinary64},
  * {@link DDBall#roundBinary32}), every other format by {@link Rounding#decide} on the same ball
  * converted exactly to a BigDecimal ball. An entry is stored only when decided.
+ *
+ * <p>Derivation: docs/methods.md §10 (the fast tier and its rounding decisions).
  */
 final class FastTier {
     /** The working precision reported for entries decided here (double-double midpoints). */
@@ -131,7 +133,7 @@ final class FastTier {
      * ({@link GridWalk}, {@link Continuation}; sequential and deterministic), at
      * {@link FastWalk#START_BITS} bits and again at doubled precision for the starts whose balls
      * are wider than 2^−115 of the jet's size (long walks on oscillating solutions lose bits to
-     * the wrapping effect, METHODS §4), up to the table's cap ({@link PrecisionLoop#runBatch}). Each future is completed as soon as
+     * the wrapping effect, docs/methods.md §4), up to the table's cap ({@link PrecisionLoop#runBatch}). Each future is completed as soon as
      * its start is final, so chunks can run while the walk goes on; all complete with null when a
      * walk would cross a singular point (the BigDecimal tier then reports it with the table's own
      * points), and exceptionally when a normalization constant fails.

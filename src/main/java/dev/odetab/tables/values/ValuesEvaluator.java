@@ -45,7 +45,7 @@ import java.util.Deque;
  *
  * <p>Trust level: Rigorous. Polynomial solutions take the exact path (exact rational values,
  * rounded once, so exactly representable values and exact rounding midpoints come out right,
- * METHODS §5). Otherwise the grid is walked point to point ({@link GridWalk}) at a working
+ * docs/methods.md §5). Otherwise the grid is walked point to point ({@link GridWalk}) at a working
  * precision; an entry is stored only when {@link Rounding#decide} finds that every point of its
  * enclosure rounds to it (Ziv). Rows with an undecided entry are walked again at twice the
  * precision, up to the table's cap; rows still undecided there are reported, never guessed.
@@ -331,7 +331,7 @@ public final class ValuesEvaluator {
 
     /**
      * Enclosures of y, y', …, y^(order) at x from the jet: y^(k)(x) = k! c_k with the Taylor
-     * coefficients at x given by the recurrence (METHODS §1).
+     * coefficients at x given by the recurrence (docs/methods.md §1).
      */
     private static Ball[] derivatives(FunctionDef f, Rational x, Jet jet, int order, int precBits) {
         Ball[] d = new Ball[Math.max(order, 1) + 1];

@@ -37,7 +37,7 @@ import java.util.Optional;
  * Certified zeros of a solution g = y (or g = y', its turning points) met walking a search
  * interval, each correctly rounded, with the other columns at the zero.
  *
- * <p>Trust level: Rigorous (METHODS §6). <b>Isolation.</b> One continuation state walks the
+ * <p>Trust level: Rigorous (docs/methods.md §6). <b>Isolation.</b> One continuation state walks the
  * interval cell by cell ({@link LocalExpansion}: balls of y, y' at exact rational cell starts,
  * the next start reached by one series step). On a cell the Taylor series at its start,
  * evaluated over the whole cell (a ball step), encloses g and g' at every point of the cell
@@ -60,7 +60,7 @@ import java.util.Optional;
  * quadratically. g(c) and G' come from the Taylor series at a cell start of the stretch (a
  * short step from the walk's own state, never a new walk from the normalization point). The
  * iteration stops when every point of X rounds to the same entry and the other columns,
- * enclosed over X, decide too (Ziv, METHODS §5); when X stops shrinking the precision is
+ * enclosed over X, decide too (Ziv, docs/methods.md §5); when X stops shrinking the precision is
  * doubled, the state at that cell start being recomputed from the normalization point, up to
  * the table's cap (then {@link PrecisionCapException}, naming the zero).
  *

@@ -31,7 +31,7 @@ import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 /**
- * Gauss rules (METHODS §6) against closed forms (Abramowitz &amp; Stegun 25.4, DLMF 3.5(v)),
+ * Gauss rules (docs/methods.md §6) against closed forms (Abramowitz &amp; Stegun 25.4, DLMF 3.5(v)),
  * computed independently in apfloat 1.15.0 at 50 digits; the general Christoffel formula
  * against the special rules it must reproduce; and exactness for x^k, k &lt;= 2n − 1, against
  * exact moments (DLMF 5.12.1 Beta integral, DLMF 5.2.1 Gamma integral).
@@ -231,7 +231,7 @@ class GaussRuleTest {
     void generalChristoffelFormulaReproducesTheLegendreAndChebyshevRules() throws Exception {
         RoundingMode ne = RoundingMode.NEAREST_EVEN;
         for (Format f : List.of(B64, D40)) {
-            // METHODS §6: the Jacobi weight 2^(α+β+1) Γ(n+α+1)Γ(n+β+1)/(Γ(n+α+β+1) n! (1−x²) P'²) (Szegő 15.3.1)
+            // docs/methods.md §6: the Jacobi weight 2^(α+β+1) Γ(n+α+1)Γ(n+β+1)/(Γ(n+α+β+1) n! (1−x²) P'²) (Szegő 15.3.1)
             // at α = β = 0 is the Legendre rule (P^(0,0) = P, DLMF 18.7.9), at α = β = −1/2 the Chebyshev T
             // rule (DLMF 18.7.3) and at α = β = 1/2 the Chebyshev U rule (DLMF 18.7.4) in closed form;
             // Gegenbauer λ = 1/2 is Legendre and λ = 1 is Chebyshev U (DLMF 18.7.9, 18.7.4).

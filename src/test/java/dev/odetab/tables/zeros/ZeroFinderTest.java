@@ -39,7 +39,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.EnumSource;
 
 /**
- * Certified zeros (METHODS §6): the first 50 zeros of Ai, Ai', Bi, Bi' against apfloat root
+ * Certified zeros (docs/methods.md §6): the first 50 zeros of Ai, Ai', Bi, Bi' against apfloat root
  * polishing and the asymptotic forms of DLMF 9.9, exact zeros, and the documented behaviour at
  * the edges (no zero, a zero on an end of the search, an exact rational zero that only an
  * enclosure can reach).
