@@ -230,29 +230,32 @@ final class ConstEval {
         } else if (e instanceof Pi) {
             return "pi";
         } else if (e instanceof Negate n) {
-            return "-" + wrap(n.operand(), precedence(n.operand()) < POWER);
+            return "-" + wrap(format(n.operand()), precedence(n.operand()) < POWER);
         } else if (e instanceof Call c) {
             return c.function().sourceName() + "(" + format(c.argument()) + ")";
         }
+        // Each operand is formatted once (formatting it again for the sign test made the
+        // time grow as 2^depth on nested expressions).
         Binary b = (Binary) e;
         int lp = precedence(b.left());
         int rp = precedence(b.right());
-        boolean rightNegative = format(b.right()).startsWith("-");
+        String left = format(b.left());
+        String right = format(b.right());
+        boolean rightNegative = right.startsWith("-");
         switch (b.op()) {
             case ADD:
             case SUBTRACT:
-                return wrap(b.left(), lp < SUM) + " " + b.op().symbol() + " "
-                        + wrap(b.right(), rp <= SUM || rightNegative);
+                return wrap(left, lp < SUM) + " " + b.op().symbol() + " " + wrap(right, rp <= SUM || rightNegative);
             case MULTIPLY:
             case DIVIDE:
-                return wrap(b.left(), lp < PRODUCT) + b.op().symbol() + wrap(b.right(), rp <= PRODUCT || rightNegative);
+                return wrap(left, lp < PRODUCT) + b.op().symbol() + wrap(right, rp <= PRODUCT || rightNegative);
             default:
-                return wrap(b.left(), lp <= POWER || format(b.left()).startsWith("-")) + "^" + wrap(b.right(), rp < NEGATION);
+                return wrap(left, lp <= POWER || left.startsWith("-")) + "^" + wrap(right, rp < NEGATION);
         }
     }
 
-    private static String wrap(ConstExpr e, boolean parens) {
-        return parens ? "(" + format(e) + ")" : format(e);
+    private static String wrap(String formatted, boolean parens) {
+        return parens ? "(" + formatted + ")" : formatted;
     }
 
     private static int precedence(ConstExpr e) {

@@ -42,6 +42,30 @@ class ConstExprTest {
     }
 
     @Test
+    void deepContinuedFractionIsEvaluatedAndPrintedOnce() throws ExprException {
+        // e_0 = 1, e_(k+1) = 1/(1 + e_k) gives e_k = F(k+1)/F(k+2) (Fibonacci numbers, F(1) = F(2) = 1),
+        // by induction: 1/(1 + F(k+1)/F(k+2)) = F(k+2)/(F(k+2) + F(k+1)) = F(k+2)/F(k+3).
+        // Printing once formatted every right operand twice, so 2^depth work: depth 40 never finished.
+        int depth = 40;
+        String text = "1";
+        for (int k = 0; k < depth; k++) {
+            text = "1/(1 + " + text + ")";
+        }
+        java.math.BigInteger f1 = java.math.BigInteger.ONE;
+        java.math.BigInteger f2 = java.math.BigInteger.ONE;
+        for (int k = 0; k < depth + 1; k++) {
+            java.math.BigInteger next = f1.add(f2);
+            f1 = f2;
+            f2 = next;
+        }
+        // now f1 = F(depth + 2), f2 = F(depth + 3); e_depth = F(depth + 1)/F(depth + 2) = (f2 - f1)/f1
+        ConstExpr e = parse(text);
+        assertEquals(Optional.of(Rational.of(f2.subtract(f1), f1)), e.exact());
+        assertEquals(text, e.toString(), "canonical text of a nested expression");
+        assertEquals(e.toString(), parse(e.toString()).toString());
+    }
+
+    @Test
     void airyAiAtZeroContainsApfloatValue() throws ExprException {
         // DLMF 9.2.3: Ai(0) = 1/(3^(2/3) Γ(2/3)). Reference: apfloat 1.15 ApfloatMath.airyAi,
         // evaluated at 1e-200 because it rejects an exact zero; |Ai(1e-200) − Ai(0)| < 1e-200.
