@@ -213,14 +213,20 @@ public record Entry(Format format, Kind kind, boolean negative, Rational value, 
             } else {
                 den = 1L << -e;
             }
-            try {
-                if (k >= 0) {
-                    den = Math.multiplyExact(den, POWERS_OF_TEN[k]);
-                } else {
-                    num = Math.multiplyExact(num, POWERS_OF_TEN[-k]);
-                }
-            } catch (ArithmeticException overflow) {
+            // The overflow test of a signed 64-bit product, without an exception (this runs once
+            // per entry; a throw per entry sent the JIT back to the interpreter every time):
+            // x·y fits in a long exactly when the high half of the 128-bit product is the sign
+            // extension of the low half.
+            long x = k >= 0 ? den : num;
+            long y = POWERS_OF_TEN[Math.abs(k)];
+            long low = x * y;
+            if (Math.multiplyHigh(x, y) != low >> 63) {
                 return null;
+            }
+            if (k >= 0) {
+                den = low;
+            } else {
+                num = low;
             }
             return new long[] {num, den};
         }
