@@ -153,12 +153,7 @@ public final class ReferenceCheck {
             ends.add(Rational.of(row.zero()).subtract(half));
             ends.add(Rational.of(row.zero()).add(half));
         }
-        List<Jet> jets;
-        try {
-            jets = GridWalk.enclose(fn, ends, prec);
-        } catch (ExprException e) {
-            throw new DataError(pending.get(0).where() + ": " + e.getMessage());
-        }
+        List<Jet> jets = enclose(fn, ends, prec, pending.get(0).where());
         List<ZeroRow> still = new ArrayList<>();
         for (int i = 0; i < pending.size(); i++) {
             ZeroRow row = pending.get(i);
@@ -259,12 +254,7 @@ public final class ReferenceCheck {
      */
     private static List<Row> judge(FunctionDef fn, List<Row> pending, int prec, Tally tally) throws DataError {
         List<Rational> xs = pending.stream().map(Row::x).toList();
-        List<Jet> jets;
-        try {
-            jets = GridWalk.enclose(fn, xs, prec);
-        } catch (ExprException e) {
-            throw new DataError(pending.get(0).where() + ": " + e.getMessage());
-        }
+        List<Jet> jets = enclose(fn, xs, prec, pending.get(0).where());
         List<Row> still = new ArrayList<>();
         for (int i = 0; i < pending.size(); i++) {
             Row row = pending.get(i);
@@ -431,5 +421,14 @@ public final class ReferenceCheck {
             }
         }
         return new Outcome("identity " + formula, "DLMF 18.9.1", count, fails, 0);
+    }
+
+    /** The engine's enclosures at the points; a normalization that cannot be evaluated is a data error at {@code where}. */
+    private static List<Jet> enclose(FunctionDef fn, List<Rational> points, int prec, String where) throws DataError {
+        try {
+            return GridWalk.enclose(fn, points, prec);
+        } catch (ExprException e) {
+            throw new DataError(where + ": " + e.getMessage());
+        }
     }
 }
